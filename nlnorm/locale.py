@@ -1,0 +1,235 @@
+"""Reading locales/: the only module that opens those files.
+
+Each language has one TOML file holding the grammar CLDR lacks (connectives, number words,
+phrase forms, look-alike words). :func:`load_locale` validates it with pydantic (unknown keys are
+errors), merges the parent chain (``en_GB -> en -> root``) into new frozen objects and caches the
+result; cached data is never changed afterwards.
+"""
+
+from __future__ import annotations
+
+import functools
+import tomllib
+from pathlib import Path
+from types import MappingProxyType
+from typing import Any, Literal, Mapping
+
+from pydantic import BaseModel, ConfigDict, Field, ValidationError, field_validator
+
+from .errors import LocaleError, suggest
+
+__all__ = ["LocaleData", "load_locale", "available_languages", "locales_dir", "Example"]
+
+RELATIONS = (
+    "since",
+    "after",
+    "before",
+    "until",
+    "within",
+    "due",
+    "from",
+    "between",
+    "range_join",
+    "since_suffix",
+    "deadline",
+)
+
+
+def locales_dir() -> Path:
+    """Where the locale files are: beside the package in a wheel, at the project root in a
+    source checkout."""
+    here = Path(__file__).resolve().parent
+    for candidate in (here / "locales", here.parent / "locales"):
+        if (candidate / "root.toml").is_file():
+            return candidate
+    raise LocaleError(f"no locales/ folder with root.toml found beside {here}; reinstall nlnorm")
+
+
+class _Strict(BaseModel):
+    model_config = ConfigDict(extra="forbid", frozen=True)
+
+
+class Meta(_Strict):
+    name: str
+    parent: str = "root"
+    spaces: bool = True
+    case_marks_names: bool = False
+    weekday_reading: Literal["nearest", "week"] = "nearest"
+    sources: tuple[str, ...] = ()
+
+
+class DayPeriodPhrase(_Strict):
+    day: int
+    period: str
+
+
+class Example(_Strict):
+    text: str
+    now: str
+    value: str | None = None
+    tz: str = "UTC"
+    reading: str | None = None
+    locale: str | None = None
+    week_start: str | None = None
+    none: bool = False  # true: the text must give no temporal mention
+
+
+class WordList(_Strict):
+    words: tuple[str, ...] = ()
+
+
+class Suffixes(_Strict):
+    suffixes: tuple[str, ...] = ()
+
+
+class LocaleFile(_Strict):
+    """The schema of one locales/*.toml file (every section optional but ``meta``)."""
+
+    meta: Meta
+    numbers: dict[str, int] = Field(default_factory=dict)
+    ordinals: dict[str, int] = Field(default_factory=dict)
+    ordinal_suffixes: Suffixes = Suffixes()
+    units: dict[
+        Literal["second", "minute", "hour", "day", "week", "month", "quarter", "year"],
+        tuple[str, ...],
+    ] = Field(default_factory=dict)
+    direction: dict[Literal["last", "this", "next"], tuple[str, ...]] = Field(default_factory=dict)
+    relative_day: dict[str, tuple[str, ...]] = Field(default_factory=dict)
+    day_period_phrases: dict[str, DayPeriodPhrase] = Field(default_factory=dict)
+    weekend: WordList = WordList()
+    to_date: dict[str, Literal["week", "month", "quarter", "year"]] = Field(default_factory=dict)
+    connectives: dict[Literal[RELATIONS], tuple[str, ...]] = Field(default_factory=dict)  # type: ignore[valid-type]
+    ambiguous: WordList = WordList()
+    not_temporal: WordList = WordList()
+    forms: dict[str, tuple[str, ...]] = Field(default_factory=dict)
+    examples: tuple[Example, ...] = ()
+
+    @field_validator("relative_day")
+    @classmethod
+    def _offsets(cls, value: dict[str, tuple[str, ...]]) -> dict[str, tuple[str, ...]]:
+        for key in value:
+            try:
+                int(key)
+            except ValueError:
+                raise ValueError(f"key {key!r} must be a day offset such as \"-2\"") from None
+        return value
+
+    @field_validator("forms")
+    @classmethod
+    def _readings(cls, value: dict[str, tuple[str, ...]]) -> dict[str, tuple[str, ...]]:
+        for key in value:
+            if not (key.startswith("R") and key[1:].isdigit()) and key not in ("D",):
+                raise ValueError(f"form key {key!r} must be a reading id such as 'R2'")
+        return value
+
+
+class LocaleData:
+    """A language's merged, read-only data (its own file over its parents')."""
+
+    __slots__ = ("code", "meta", "chain", "_file", "numbers", "ordinals", "ordinal_suffixes",
+                 "units", "direction", "relative_day", "day_period_phrases", "weekend",
+                 "to_date", "connectives", "ambiguous", "not_temporal", "forms", "root_forms",
+                 "examples")
+
+    def __init__(self, code: str, chain: tuple[str, ...], files: list[LocaleFile]) -> None:
+        own = files[0]
+        self.code = code
+        self.chain = chain
+        self.meta = own.meta
+
+        def merged(attr: str) -> Mapping[str, Any]:
+            out: dict[str, Any] = {}
+            for f in reversed(files):
+                out.update(getattr(f, attr))
+            return MappingProxyType(out)
+
+        def words(attr: str) -> frozenset[str]:
+            out: set[str] = set()
+            for f in files:
+                out.update(w.lower() for w in getattr(f, attr).words)
+            return frozenset(out)
+
+        self.numbers = merged("numbers")
+        self.ordinals = merged("ordinals")
+        self.ordinal_suffixes = tuple(
+            dict.fromkeys(s for f in files for s in f.ordinal_suffixes.suffixes)
+        )
+        self.units = merged("units")
+        self.direction = merged("direction")
+        self.relative_day = merged("relative_day")
+        self.day_period_phrases = merged("day_period_phrases")
+        self.weekend = words("weekend")
+        self.to_date = merged("to_date")
+        self.connectives = merged("connectives")
+        self.ambiguous = words("ambiguous")
+        self.not_temporal = words("not_temporal")
+        # Forms of this language and of parents that are languages; root forms are kept apart
+        # because they are the same in every language.
+        forms: dict[str, tuple[str, ...]] = {}
+        for name, f in zip(reversed(chain), reversed(files)):
+            if name == "root":
+                continue
+            for key, value in f.forms.items():
+                forms[key] = value
+        self.forms = MappingProxyType(forms)
+        self.root_forms = MappingProxyType(dict(files[-1].forms)) if chain[-1] == "root" else {}
+        self.examples = own.examples
+
+    def __repr__(self) -> str:
+        return f"LocaleData({self.code!r}, chain={self.chain!r})"
+
+
+def _read(path: Path) -> LocaleFile:
+    rel = f"locales/{path.name}"
+    try:
+        raw = tomllib.loads(path.read_text(encoding="utf-8"))
+    except tomllib.TOMLDecodeError as exc:
+        raise LocaleError(f"{rel} is not valid TOML: {exc}") from None
+    try:
+        return LocaleFile.model_validate(raw)
+    except ValidationError as exc:
+        err = exc.errors()[0]
+        where = " ".join(f"[{p}]" if i == 0 else str(p) for i, p in enumerate(err["loc"]))
+        got = err.get("input")
+        raise LocaleError(f"{rel} {where}: {err['msg'].lower()}, got {got!r}") from None
+
+
+@functools.cache
+def available_languages() -> frozenset[str]:
+    """Codes of every locale file (``root`` and files starting with ``_`` excluded)."""
+    return frozenset(
+        p.stem for p in locales_dir().glob("*.toml") if p.stem != "root" and not p.stem.startswith("_")
+    )
+
+
+@functools.cache
+def load_locale(code: str) -> LocaleData:
+    """Load, validate and merge ``locales/<code>.toml`` with its parents.
+
+    >>> en = load_locale("en")
+    >>> en.chain, en.direction["last"][0]
+    (('en', 'root'), 'last')
+
+    Raises:
+        LocaleError: the code has no file, or a file breaks the format (the message names the
+            file, the section and the key).
+    """
+    base = locales_dir()
+    chain: list[str] = []
+    files: list[LocaleFile] = []
+    current = code
+    while current:
+        if current in chain:
+            raise LocaleError(f"locales/{current}.toml: parent chain loops ({' -> '.join(chain)})")
+        path = base / f"{current}.toml"
+        if not path.is_file():
+            known = available_languages()
+            raise LocaleError(
+                f"no locale data for {current!r}{suggest(current, known)} "
+                f"(known: {', '.join(sorted(known))})"
+            )
+        data = _read(path)
+        chain.append(current)
+        files.append(data)
+        current = data.meta.parent if current != "root" else ""
+    return LocaleData(code, tuple(chain), files)

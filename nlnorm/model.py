@@ -1,0 +1,270 @@
+"""The values that flow between pipeline stages.
+
+All are frozen, slotted dataclasses: a stage never changes what it was given. Enum values are the
+strings that appear in the output (``Grain.WEEK == "week"``).
+"""
+
+from __future__ import annotations
+
+import enum
+from dataclasses import dataclass, field
+from datetime import datetime
+
+__all__ = [
+    "Grain",
+    "Kind",
+    "Span",
+    "Candidate",
+    "Meaning",
+    "RelativeDay",
+    "ShiftPeriod",
+    "Offset",
+    "Rolling",
+    "DateRef",
+    "WeekdayRef",
+    "WeekdayCount",
+    "ToDate",
+    "DayPeriodRef",
+    "WeekendRef",
+    "Now",
+    "Duration",
+    "Bounded",
+    "Between",
+    "Interval",
+    "Reading",
+    "Resolved",
+]
+
+
+class Grain(str, enum.Enum):
+    """The calendar unit an interval is measured in."""
+
+    SECOND = "second"
+    MINUTE = "minute"
+    HOUR = "hour"
+    DAY = "day"
+    WEEK = "week"
+    MONTH = "month"
+    QUARTER = "quarter"
+    HALF = "half"
+    YEAR = "year"
+    SPRINT = "sprint"
+
+    def __str__(self) -> str:
+        return self.value
+
+
+class Kind(str, enum.Enum):
+    """What sort of value a mention stands for."""
+
+    RANGE = "range"
+    INSTANT = "instant"
+    DURATION = "duration"
+    SPRINT = "sprint"
+    NUMBER = "number"
+    PERSON = "person"
+    VALUE = "value"
+
+    def __str__(self) -> str:
+        return self.value
+
+
+@dataclass(frozen=True, slots=True)
+class Span:
+    """Half-open character offsets ``[start, end)``."""
+
+    start: int
+    end: int
+
+
+@dataclass(frozen=True, slots=True)
+class Candidate:
+    """A phrase the scanner found, before it means anything.
+
+    ``span`` indexes the prepared (normalized) text; ``slots`` holds the values the locale's
+    lexicon gave each slot of the matched form (a grain name, an offset, a month number...).
+    ``connective`` and ``parts`` describe combinations such as "since X" or "between X and Y".
+    """
+
+    span: Span
+    lang: str
+    reading: str
+    slots: tuple[tuple[str, object], ...] = ()
+    weak: bool = False
+    connective: str | None = None
+    parts: tuple["Candidate", ...] = ()
+    confidence: float = 1.0
+
+    def slot(self, name: str, default: object = None) -> object:
+        for key, value in self.slots:
+            if key == name:
+                return value
+        return default
+
+
+# --- language-free meanings (output of the parse stage) -------------------------------------
+
+
+class Meaning:
+    """Base of the structured, language-free meanings the parse stage produces."""
+
+    __slots__ = ()
+
+
+@dataclass(frozen=True, slots=True)
+class RelativeDay(Meaning):
+    """R1: the day ``offset`` days from today."""
+
+    offset: int
+
+
+@dataclass(frozen=True, slots=True)
+class ShiftPeriod(Meaning):
+    """R2: the whole calendar period of ``grain`` shifted by ``offset`` from the current one."""
+
+    grain: Grain
+    offset: int
+
+
+@dataclass(frozen=True, slots=True)
+class Offset(Meaning):
+    """R3 (``n < 0``) / R4 (``n > 0``): the period of ``grain`` containing now + n units."""
+
+    grain: Grain
+    n: int
+
+
+@dataclass(frozen=True, slots=True)
+class Rolling(Meaning):
+    """R5 (``direction < 0``) / R6 (``direction > 0``): a window of ``n`` units ending/starting now."""
+
+    grain: Grain
+    n: int
+    direction: int
+    explicit_n: bool = True
+
+
+@dataclass(frozen=True, slots=True)
+class DateRef(Meaning):
+    """R12, R17-R20: a calendar period given by some of its fields; missing ones come from bias.
+
+    ``alternate`` holds the other reading of a numeric date such as 03/04/2026.
+    """
+
+    grain: Grain
+    year: int | None = None
+    half: int | None = None
+    quarter: int | None = None
+    month: int | None = None
+    week: int | None = None
+    day: int | None = None
+    alternate: "DateRef | None" = None
+
+
+@dataclass(frozen=True, slots=True)
+class WeekdayRef(Meaning):
+    """R13-R16: a weekday (0 = Monday).
+
+    ``mode`` is ``"bare"`` (R13), ``"last"`` (R14), ``"next"`` (R15) or ``"week"`` (R16, the
+    weekday inside the week shifted by ``week_offset``). ``deadline`` marks R13 after by/due/until.
+    """
+
+    weekday: int
+    mode: str
+    week_offset: int = 0
+    deadline: bool = False
+
+
+@dataclass(frozen=True, slots=True)
+class WeekdayCount(Meaning):
+    """CLDR "in 3 Sundays" / "3 Sundays ago": the n-th such weekday after (n>0) or before today."""
+
+    weekday: int
+    n: int
+
+
+@dataclass(frozen=True, slots=True)
+class ToDate(Meaning):
+    """R21: from the start of the current period of ``grain`` to now."""
+
+    grain: Grain
+
+
+@dataclass(frozen=True, slots=True)
+class DayPeriodRef(Meaning):
+    """R22: a CLDR day period (``"morning1"``...) of the day ``day_offset`` days from today."""
+
+    day_offset: int
+    period: str
+    lang: str
+
+
+@dataclass(frozen=True, slots=True)
+class WeekendRef(Meaning):
+    """R23: this (0) / last (-1) / next (+1) weekend; ``bare`` for "over the weekend"."""
+
+    offset: int
+    bare: bool = False
+
+
+@dataclass(frozen=True, slots=True)
+class Now(Meaning):
+    """The reference instant itself (CLDR "now")."""
+
+
+@dataclass(frozen=True, slots=True)
+class Duration(Meaning):
+    """A length of time with no position ("for 3 days")."""
+
+    grain: Grain
+    n: int
+
+
+@dataclass(frozen=True, slots=True)
+class Bounded(Meaning):
+    """R7-R10: ``since`` / ``after`` / ``before`` / ``until`` another meaning."""
+
+    relation: str
+    inner: Meaning
+
+
+@dataclass(frozen=True, slots=True)
+class Between(Meaning):
+    """R11: from the start of ``first`` to the end of ``last``."""
+
+    first: Meaning
+    last: Meaning
+
+
+# --- resolution output ------------------------------------------------------------------------
+
+
+@dataclass(frozen=True, slots=True)
+class Interval:
+    """A half-open interval ``[start, end)`` of aware date-times; ``None`` is unbounded."""
+
+    start: datetime | None
+    end: datetime | None
+    grain: Grain
+    value: str
+
+
+@dataclass(frozen=True, slots=True)
+class Reading:
+    """One way of reading a phrase: its interval, the rule id and, for alternatives, the policy."""
+
+    interval: Interval
+    reading: str
+    note: str
+    policy: str | None = None
+
+
+@dataclass(frozen=True, slots=True)
+class Resolved:
+    """A candidate with its chosen reading and the other plausible ones."""
+
+    candidate: Candidate
+    meaning: Meaning
+    kind: Kind
+    chosen: Reading
+    alternatives: tuple[Reading, ...] = field(default=())

@@ -1,0 +1,75 @@
+"""Text preparation: a normalized copy of the question with a map back to the original.
+
+Scanning works on a case-folded, NFKC-normalized copy in which dashes and quotes are unified.
+Every character of the copy remembers the index of the original character it came from, so a
+mention's ``char_start``/``char_end`` always index the caller's string.
+"""
+
+from __future__ import annotations
+
+import unicodedata
+from dataclasses import dataclass
+
+__all__ = ["Prepared", "prepare"]
+
+# Length-preserving unifications applied after case folding.
+_TRANSLATE = str.maketrans(
+    {
+        "\u2010": "-", "\u2011": "-", "\u2012": "-", "\u2013": "-", "\u2014": "-",
+        "\u2015": "-", "\u2212": "-", "\u2019": "'", "\u2018": "'", "\u201b": "'",
+        "\u00a0": " ", "\u202f": " ", "\u2009": " ", "\t": " ", "\n": " ", "\r": " ",
+    }
+)
+
+
+@dataclass(frozen=True, slots=True)
+class Prepared:
+    """The original question, its normalized copy, and where each copy character came from.
+
+    ``offsets`` is ``None`` when the copy has the same length as the original and each character
+    maps to the one at the same index (the common case); otherwise ``offsets[i]`` is the original
+    index of copy character ``i`` and ``offsets[len(text)] == len(original)``.
+    """
+
+    original: str
+    text: str
+    offsets: tuple[int, ...] | None = None
+
+    def to_original(self, start: int, end: int) -> tuple[int, int]:
+        """Map a half-open span of the copy to a half-open span of the original."""
+        if self.offsets is None:
+            return start, end
+        o = self.offsets
+        # The end maps to just past the last original character the span covers.
+        return o[start], (o[end - 1] + 1 if end > start else o[start])
+
+
+def prepare(text: str) -> Prepared:
+    """Normalize ``text`` for scanning.
+
+    >>> p = prepare("Bugs from LAST week")
+    >>> p.text, p.offsets
+    ('bugs from last week', None)
+    >>> p = prepare("ﬁxed since ２０２６–01–05")
+    >>> p.text, p.to_original(11, 21)
+    ('fixed since 2026-01-05', (10, 20))
+    """
+    if not isinstance(text, str):
+        from .errors import InputError
+
+        raise InputError(f"text must be a string, got {type(text).__name__}")
+    if text.isascii():
+        folded = text.lower()
+        return Prepared(text, folded.translate(_TRANSLATE), None)
+    if unicodedata.is_normalized("NFKC", text):
+        folded = text.casefold()
+        if len(folded) == len(text):
+            return Prepared(text, folded.translate(_TRANSLATE), None)
+    pieces: list[str] = []
+    offsets: list[int] = []
+    for index, ch in enumerate(text):
+        piece = unicodedata.normalize("NFKC", ch).casefold().translate(_TRANSLATE)
+        pieces.append(piece)
+        offsets.extend([index] * len(piece))
+    offsets.append(len(text))
+    return Prepared(text, "".join(pieces), tuple(offsets))

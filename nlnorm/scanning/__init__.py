@@ -1,0 +1,103 @@
+"""Scanning: prepared text -> candidate phrases (spans and slot values), no dates yet."""
+
+from __future__ import annotations
+
+from bisect import bisect_right
+from typing import TYPE_CHECKING
+
+from ..model import Candidate, Span
+from ..preparing import Prepared
+from .combine import combine
+from .scanner import Scanner, scanner_for
+
+if TYPE_CHECKING:
+    from ..context import Context
+
+__all__ = ["scan", "scan_text", "scanner_for", "Scanner"]
+
+
+def scan(prepared: Prepared, ctx: "Context") -> tuple[Candidate, ...]:
+    """Find the candidate time phrases of a prepared question in ``ctx.languages``.
+
+    >>> from nlnorm.context import Context
+    >>> from nlnorm.preparing import prepare
+    >>> ctx = Context.at("2026-11-27T10:00", tz="Europe/Berlin")
+    >>> [(c.reading, c.slots) for c in scan(prepare("bugs from last week"), ctx)]
+    [('R2', (('dir', -1), ('unit', 'week')))]
+    """
+    return scan_text(prepared, scanner_for(ctx.languages))
+
+
+def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
+    """:func:`scan` with an explicit scanner (no context needed)."""
+    text = prepared.text
+    hits = [m.start() for m in scanner.trigger.finditer(text)]
+    if not hits:
+        return ()
+    starts = [m.start() for m in scanner.word_start.finditer(text)]
+    positions: set[int] = set()
+    back = scanner.lookback
+    for hit in hits:
+        k = bisect_right(starts, hit)
+        positions.update(starts[max(0, k - back) : k])
+        positions.add(hit)
+    found: list[Candidate] = []
+    limit = 0
+    index = scanner.index
+    for pos in sorted(positions):
+        if pos < limit:
+            continue
+        buckets = index.get(text[pos])
+        if not buckets:
+            continue
+        best = None
+        best_key: tuple[int, int, int] | None = None
+        for bucket in buckets:
+            m = bucket.regex.match(text, pos)
+            if m is None:
+                continue
+            form = bucket.forms[m.lastgroup]  # type: ignore[index]
+            key = (m.end(), form.tokens, -form.order)
+            if best_key is None or key > best_key:
+                best, best_key = (m, form), key
+        if best is None:
+            continue
+        m, form = best
+        found.append(_candidate(m, form, scanner, prepared))
+        limit = m.end()
+    if not found:
+        return ()
+    return combine(prepared, found, scanner)
+
+
+def _candidate(m, form, scanner: Scanner, prepared: Prepared) -> Candidate:  # type: ignore[no-untyped-def]
+    lex = scanner.lexicons.get(form.lang) or next(iter(scanner.lexicons.values()))
+    slots: list[tuple[str, object]] = list(form.fixed)
+    weak = form.weak
+    from .forms import CANONICAL_SLOT
+    from .lexicon import REGEX_CLASSES
+
+    for group, cls in form.slots:
+        raw = m.group(group)
+        if raw is None:
+            continue
+        if cls in REGEX_CLASSES or cls == "day":
+            if cls == "numdate":
+                value: object = raw
+            else:
+                digits = "".join(ch for ch in raw if ch.isdigit())
+                value = int(digits) if digits else raw
+        else:
+            value = lex.value(cls, raw)
+            if form.single == cls and " ".join(raw.split()) in lex.ambiguous:
+                weak = True
+        slots.append((CANONICAL_SLOT.get(cls, cls), value))
+    if not weak and m.start() > 0 and text_starts_digit(prepared.text, m.start()):
+        prev = prepared.text[max(0, m.start() - 24) : m.start()].split()
+        if prev and prev[-1].strip(":#-") in lex.not_temporal:
+            weak = True
+    return Candidate(Span(m.start(), m.end()), form.lang, form.reading, tuple(slots), weak)
+
+
+def text_starts_digit(text: str, pos: int) -> bool:
+    return text[pos : pos + 1].isdigit()

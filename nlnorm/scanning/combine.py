@@ -1,0 +1,193 @@
+"""Second scanning pass: connectives and ranges around the phrases the forms found.
+
+"since X", "before X", "by Friday", "between X and Y", "from X to Y", "X - Y", "March 3-17",
+"from March on"; and the cue rule: a weak phrase (a bare year, an ambiguous month such as "may")
+stays only when a connective or a range vouches for it.
+"""
+
+from __future__ import annotations
+
+import re
+from dataclasses import replace
+
+from ..model import Candidate, Span
+from ..preparing import Prepared
+from .scanner import Scanner
+
+__all__ = ["combine"]
+
+_BOUND = {"since": "R7", "after": "R8", "before": "R9", "until": "R10"}
+_DAY_READINGS = ("R12", "R18")
+_SENTENCE_END = re.compile(r"(?:^|[.!?:;\"'(\[]\s*)$")
+_PREV_WORD = re.compile(r"(\w+)\W*$")
+
+
+def _relations(scanner: Scanner, phrase: str, lang: str) -> frozenset[str]:
+    table = scanner.connectives.relations.get(" ".join(phrase.split()), {})
+    if lang in table:
+        return table[lang]
+    merged: set[str] = set()
+    for rels in table.values():
+        merged |= rels
+    return frozenset(merged)
+
+
+def _connective_lang(scanner: Scanner, phrase: str, lang: str) -> str:
+    table = scanner.connectives.relations.get(" ".join(phrase.split()), {})
+    if lang in table or not table:
+        return lang
+    return next(iter(table))
+
+
+def _has_day(c: Candidate) -> bool:
+    return c.reading in _DAY_READINGS and c.slot("day") is not None and c.slot("month") is not None
+
+
+def _is_name(prepared: Prepared, c: Candidate, scanner: Scanner) -> bool:
+    """English-style capitalisation: a capitalised word mid-sentence is a name ("the May release")."""
+    lex = scanner.lexicons.get(c.lang)
+    if lex is None or not lex.case_marks_names:
+        return False
+    start, _ = prepared.to_original(c.span.start, c.span.end)
+    original = prepared.original
+    if not original[start : start + 1].isupper():
+        return False
+    return _SENTENCE_END.search(original[:start]) is None
+
+
+def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tuple[Candidate, ...]:
+    """Attach connectives, join ranges and drop weak phrases without a cue."""
+    text = prepared.text
+    conn = scanner.connectives
+    out: list[Candidate] = []
+    i = 0
+    n = len(found)
+    while i < n:
+        a = found[i]
+        pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)
+        pre_word = pre.group("c") if pre else None
+        pre_rel = _relations(scanner, pre_word, a.lang) if pre_word else frozenset()
+
+        # Ranges: "between X and Y", "from X to Y", "X - Y".
+        if i + 1 < n:
+            b = found[i + 1]
+            gap = conn.join.fullmatch(text, a.span.end, b.span.start)
+            if gap is not None:
+                is_and = gap.group("j") is not None and "between" not in pre_rel and _is_and(
+                    scanner, gap.group("j"), a.lang
+                )
+                if not is_and and (not (a.weak and b.weak) or pre_rel & {"between", "from"}):
+                    start = pre.start("c") if pre_rel & {"between", "from"} else a.span.start
+                    out.append(_range(a, b, start, b.span.end, pre_word, scanner))
+                    i += 2
+                    continue
+        # "March 3-17", "between March 3 and 17".
+        if _has_day(a):
+            m = conn.day_end.match(text, a.span.end)
+            if m is not None and (m.group("j") is None or not _is_and(scanner, m.group("j"), a.lang)
+                                  or "between" in pre_rel):
+                year = int(m.group("y")) if m.group("y") else a.slot("year")
+                first = _with(a, year=year)
+                last = Candidate(
+                    Span(m.start("d"), m.end()), a.lang, "R18" if year else a.reading,
+                    _slots(a, day=int(m.group("d")), year=year),
+                )
+                start = pre.start("c") if pre_rel & {"between", "from"} else a.span.start
+                out.append(_range(first, last, start, m.end(), pre_word, scanner))
+                i += 1
+                continue
+            m = conn.day_start.search(text, max(0, a.span.start - 40), a.span.start)
+            if m is not None:
+                pre2 = m.group("pre")
+                pre2_rel = _relations(scanner, pre2, a.lang) if pre2 else frozenset()
+                j = m.group("j")
+                if j is None or not _is_and(scanner, j, a.lang) or "between" in pre2_rel:
+                    first = Candidate(
+                        Span(m.start("d"), m.start("d") + len(m.group("d"))), a.lang, a.reading,
+                        _slots(a, day=int(m.group("d"))),
+                    )
+                    start = m.start("pre") if pre2_rel & {"between", "from"} else m.start("d")
+                    if out and out[-1].span.end > start:
+                        start = m.start("d")
+                    out.append(_range(first, a, start, a.span.end, pre2, scanner))
+                    i += 1
+                    continue
+
+        # A single connective before the phrase.
+        if pre_rel and not (out and out[-1].span.end > pre.start("c")):
+            lang = _connective_lang(scanner, pre_word, a.lang)
+            start = pre.start("c")
+            relation = next((r for r in ("since", "after", "before", "until") if r in pre_rel), None)
+            deadline = "deadline" in pre_rel
+            inner = _deadline(a) if deadline else a
+            if relation is not None:
+                out.append(
+                    Candidate(Span(start, a.span.end), lang, _BOUND[relation], connective=relation,
+                              parts=(inner,))
+                )
+                i += 1
+                continue
+            if "due" in pre_rel:
+                out.append(replace(inner, span=Span(start, a.span.end), weak=False))
+                i += 1
+                continue
+            if "from" in pre_rel:
+                suffix = conn.suffix.match(text, a.span.end)
+                if suffix is not None:
+                    out.append(Candidate(Span(start, suffix.end()), lang, "R7", connective="since",
+                                         parts=(a,)))
+                    i += 1
+                    continue
+            if pre_rel & {"within", "from"}:
+                out.append(replace(a, span=Span(start, a.span.end), weak=False))
+                i += 1
+                continue
+        # "March onwards".
+        suffix = conn.suffix.match(text, a.span.end)
+        if suffix is not None and "since_suffix" in _relations(scanner, suffix.group("s"), a.lang) \
+                and suffix.group("s") not in ("on",):
+            out.append(Candidate(Span(a.span.start, suffix.end()), a.lang, "R7", connective="since",
+                                 parts=(a,)))
+            i += 1
+            continue
+        if a.weak and not _is_name(prepared, a, scanner):
+            i += 1
+            continue
+        out.append(replace(a, weak=False) if a.weak else a)
+        i += 1
+    return tuple(out)
+
+
+def _is_and(scanner: Scanner, word: str, lang: str) -> bool:
+    # "and" joins a range only after "between"; other joiners ("to", "-") stand alone.
+    return word in ("and", "und", "et", "y", "e", "en", "i", "и", "і", "ve", "와", "과", "と", "和")
+
+
+def _deadline(c: Candidate) -> Candidate:
+    if c.reading == "R13":
+        return replace(c, slots=c.slots + (("deadline", True),))
+    return c
+
+
+def _slots(c: Candidate, **changes: object) -> tuple[tuple[str, object], ...]:
+    data = dict(c.slots)
+    data.update({k: v for k, v in changes.items() if v is not None})
+    return tuple(data.items())
+
+
+def _with(c: Candidate, **changes: object) -> Candidate:
+    if all(v is None for v in changes.values()):
+        return c
+    return replace(c, slots=_slots(c, **changes))
+
+
+def _range(a: Candidate, b: Candidate, start: int, end: int, pre: str | None,
+           scanner: Scanner) -> Candidate:
+    lang = a.lang if a.lang != "und" else b.lang
+    if pre:
+        lang = _connective_lang(scanner, pre, lang)
+    # An explicit year on the end applies to a start that has none ("1 March - 15 April 2026").
+    if b.slot("year") is not None and a.slot("year") is None and a.reading in ("R12", "R18", "R19", "R20"):
+        a = replace(a, slots=a.slots + (("year_from_end", b.slot("year")),))
+    return Candidate(Span(start, end), lang, "R11", connective="between",
+                     parts=(replace(a, weak=False), replace(b, weak=False)))

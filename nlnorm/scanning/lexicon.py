@@ -1,0 +1,193 @@
+"""Word classes of one language: CLDR words from babel plus the grammar in locales/.
+
+A lexicon maps each slot class of the form language (``{month}``, ``{unit}``, ``{dir}``...) to
+its words and their values. It is built once per language and cached.
+"""
+
+from __future__ import annotations
+
+import functools
+import re
+from dataclasses import dataclass
+from types import MappingProxyType
+from typing import Mapping
+
+from .. import cldr
+from ..locale import load_locale
+
+__all__ = ["Lexicon", "lexicon", "trie_regex", "REGEX_CLASSES", "collapse"]
+
+# Slot classes matched by a regular expression rather than a word list. ``day`` gets the
+# language's ordinal suffixes appended when the lexicon is built.
+REGEX_CLASSES: Mapping[str, str] = MappingProxyType(
+    {
+        "year": r"(?:19\d\d|20\d\d|2100)(?![.,]\d)",
+        "day": r"(?:3[01]|[12]\d|0?[1-9])",
+        "day2": r"(?:3[01]|[12]\d|0[1-9])",
+        "month2": r"(?:1[0-2]|0[1-9])",
+        "qnum": r"[1-4]",
+        "hnum": r"[12]",
+        "weeknum": r"(?:5[0-3]|[1-4]\d|0?[1-9])",
+        "week2": r"(?:5[0-3]|[1-4]\d|0[1-9])",
+        "isoday": r"[1-7]",
+        "numdate": r"(?:\d{1,2}[/.]\d{1,2}[/.](?:\d{4}|\d{2})|\d{4}[/.]\d{1,2}[/.]\d{1,2})(?![/.]?\d)",
+        "digits": r"\d{1,3}",
+    }
+)
+
+#: Slot classes whose words may trigger the scanner (the others only ever follow them).
+TRIGGER_CLASSES = (
+    "relday", "unit", "month", "weekday", "weekday_abbr", "weekend", "to_date", "dayperiod",
+    "dayperiod_phrase", "fixed",
+)
+
+_SPACES = re.compile(r"\s+")
+
+
+def collapse(text: str) -> str:
+    """Lower-case ``text`` with runs of white space folded to one space."""
+    return _SPACES.sub(" ", text.strip().lower())
+
+
+def trie_regex(words: list[str] | tuple[str, ...] | frozenset[str], spaces: str = r"\s+") -> str:
+    """One regular expression matching any of ``words``, factored as a trie.
+
+    Python's ``re`` does not factor a flat ``a|b|c`` alternation, so a trie is an order of
+    magnitude faster on large word lists. A space inside a word matches ``spaces``.
+
+    >>> trie_regex(["may", "mayday", "march"])
+    'ma(?:r(?:ch)|y(?:day)?)'
+    """
+    trie: dict[str, dict] = {}
+    for word in words:
+        if not word:
+            continue
+        node = trie
+        for ch in word:
+            node = node.setdefault(ch, {})
+        node[""] = {}
+
+    def emit(node: dict[str, dict]) -> str:
+        end = "" in node
+        branches = []
+        for ch in sorted(k for k in node if k):
+            piece = spaces if ch == " " else re.escape(ch)
+            branches.append(piece + emit(node[ch]))
+        if not branches:
+            return ""
+        if len(branches) == 1 and not end:
+            return branches[0]
+        body = "(?:" + "|".join(branches) + ")"
+        return body + "?" if end else body
+
+    return emit(trie)
+
+
+@dataclass(frozen=True, slots=True)
+class Lexicon:
+    """Slot classes of one language: ``words[cls][word] -> value``; ``regex[cls]`` for each."""
+
+    lang: str
+    spaces: bool
+    words: Mapping[str, Mapping[str, object]]
+    regex: Mapping[str, str]
+    triggers: frozenset[str]
+    ambiguous: frozenset[str]
+    not_temporal: frozenset[str]
+    case_marks_names: bool
+
+    def value(self, cls: str, text: str) -> object:
+        """The value of ``text`` (as matched) in word class ``cls``."""
+        table = self.words.get(cls)
+        if table is None:
+            return text
+        key = collapse(text)
+        if key in table:
+            return table[key]
+        if cls == "num" and key.isdigit():
+            return int(key)
+        return table.get(key.rstrip("."), key)
+
+
+def _longest_token(word: str) -> str:
+    return max(word.split(), key=len) if word.split() else word
+
+
+@functools.cache
+def lexicon(lang: str) -> Lexicon:
+    """Build (once) the lexicon of ``lang`` from CLDR via babel and ``locales/<lang>.toml``."""
+    data = load_locale(lang)
+    words: dict[str, dict[str, object]] = {}
+
+    def put(cls: str, word: str, value: object) -> None:
+        words.setdefault(cls, {}).setdefault(collapse(word), value)
+
+    months = cldr.month_words(lang)
+    for word, month in months["wide"]:
+        put("month", word, month)
+        put("month_wide", word, month)
+    for word, month in months["abbreviated"]:
+        put("month", word, month)
+        put("month_abbr", word, month)
+    days = cldr.weekday_words(lang)
+    for word, day in days["wide"]:
+        put("weekday", word, day)
+    for word, day in days["abbreviated"]:
+        if collapse(word) not in words.get("weekday", {}):
+            put("weekday_abbr", word, day)
+    for field in cldr.relative_fields(lang):
+        if field.field == "day":
+            put("relday", field.text, field.offset)
+    for key, phrases in data.relative_day.items():
+        for phrase in phrases:
+            put("relday", phrase, int(key))
+    for word, period in cldr.day_period_words(lang):
+        put("dayperiod", word, period)
+    for phrase, spec in data.day_period_phrases.items():
+        put("dayperiod_phrase", phrase, (spec.day, spec.period))
+    for word, number in data.numbers.items():
+        put("num", word, number)
+    for word, number in data.ordinals.items():
+        put("ordinal", word, number)
+    for grain, forms in data.units.items():
+        for form in forms:
+            put("unit", form, grain)
+    offsets = {"last": -1, "this": 0, "next": 1}
+    for name, forms in data.direction.items():
+        for form in forms:
+            put("dir", form, offsets[name])
+    for word in data.weekend:
+        put("weekend", word, True)
+    for word, grain in data.to_date.items():
+        put("to_date", word, grain)
+
+    suffixes = data.ordinal_suffixes
+    sep = r"\s+" if data.meta.spaces else r"\s*"
+    regex: dict[str, str] = {}
+    for cls, table in words.items():
+        regex[cls] = "(?:" + trie_regex(sorted(table), sep) + ")" if table else "(?!)"
+    regex.update(REGEX_CLASSES)
+    if suffixes:
+        regex["day"] = REGEX_CLASSES["day"] + "(?:" + trie_regex(suffixes) + ")?(?!\\d)"
+    else:
+        regex["day"] = REGEX_CLASSES["day"] + "(?!\\d)"
+    num_words = regex.get("num")
+    regex["num"] = r"(?:\d{1,3}" + (f"|{num_words}" if num_words else "") + ")"
+    for cls in ("month", "month_wide", "month_abbr", "weekday", "weekday_abbr", "relday",
+                "dayperiod", "unit", "dir", "ordinal", "weekend", "to_date", "dayperiod_phrase"):
+        regex.setdefault(cls, "(?!)")
+
+    triggers: set[str] = set()
+    for cls in TRIGGER_CLASSES:
+        for word in words.get(cls, {}):
+            triggers.add(_longest_token(word))
+    return Lexicon(
+        lang=lang,
+        spaces=data.meta.spaces,
+        words=MappingProxyType({k: MappingProxyType(v) for k, v in words.items()}),
+        regex=MappingProxyType(regex),
+        triggers=frozenset(triggers),
+        ambiguous=data.ambiguous,
+        not_temporal=data.not_temporal,
+        case_marks_names=data.meta.case_marks_names,
+    )

@@ -1,0 +1,234 @@
+"""The combined scanner of a set of languages.
+
+Built once per set of languages and cached. It holds one trigger expression (a trie of every
+time word of every language, plus digits): a question with no trigger is done after one regex
+pass. Around each trigger it tries the forms whose first character fits, at the trigger and at
+the few word starts before it, and keeps the longest match. Scanning cost grows with the number
+of triggers in a question, not with the number of languages.
+"""
+
+from __future__ import annotations
+
+import functools
+import re
+from collections import defaultdict
+from dataclasses import dataclass
+from types import MappingProxyType
+from typing import Mapping
+
+from .. import cldr
+from ..locale import load_locale
+from .forms import Form, compile_form
+from .lexicon import Lexicon, lexicon, trie_regex
+
+__all__ = ["Scanner", "scanner_for", "cldr_forms"]
+
+
+@dataclass(frozen=True, slots=True)
+class Connectives:
+    """Connective words of the enabled languages, as expressions and lookups."""
+
+    before: re.Pattern[str]  # a connective phrase right before a position (search, endpos)
+    join: re.Pattern[str]  # the whole gap between two phrases of a range (fullmatch)
+    suffix: re.Pattern[str]  # "onwards" after a phrase (match at its end)
+    day_end: re.Pattern[str]  # "-17" after "March 3" (match at its end)
+    day_start: re.Pattern[str]  # "3 -" before "17 March" (search, endpos)
+    relations: Mapping[str, Mapping[str, frozenset[str]]]  # phrase -> lang -> relations
+    joins: Mapping[str, Mapping[str, frozenset[str]]]
+
+
+@dataclass(frozen=True, slots=True)
+class Bucket:
+    """All forms that can start with one character, as one expression.
+
+    Alternatives are ordered longest form first (more tokens), then by file order, so the first
+    alternative that matches is the most specific reading; ``m.lastgroup`` names the form.
+    """
+
+    regex: re.Pattern[str]
+    forms: Mapping[str, Form]
+
+
+@dataclass(frozen=True, slots=True)
+class Scanner:
+    languages: tuple[str, ...]
+    trigger: re.Pattern[str]
+    index: Mapping[str, tuple[Bucket, ...]]
+    lexicons: Mapping[str, Lexicon]
+    word_start: re.Pattern[str]
+    connectives: Connectives
+    forms: tuple[Form, ...]
+    lookback: int = 6
+
+
+def cldr_forms(lang: str) -> list[tuple[str, str, tuple[tuple[str, object], ...]]]:
+    """Forms generated from the CLDR relative date fields and past/future patterns of ``lang``:
+    ``(form, reading, fixed slots)``.
+
+    Narrow weekday fields ("last M", "in 3 Su") are left out: one or two letters are not a
+    weekday in running text.
+    """
+    out: list[tuple[str, str, tuple[tuple[str, object], ...]]] = []
+    seen: set[str] = set()
+    weekday_fields = cldr.WEEKDAY_FIELDS
+    for f in cldr.relative_fields(lang):
+        text = f.text.lower().strip()
+        if not text or any(c in text for c in "(){}~") or text in seen:
+            continue
+        if f.field in weekday_fields and f.width == "narrow":
+            continue
+        seen.add(text)
+        if f.field in weekday_fields:
+            reading = {-1: "R14", 0: "R16", 1: "R15"}.get(f.offset)
+            if reading is None:
+                continue
+            fixed: tuple[tuple[str, object], ...] = (
+                ("weekday", weekday_fields.index(f.field)),
+                ("offset", f.offset),
+            )
+        elif f.field == "day":
+            reading, fixed = "R1", (("relday", f.offset),)
+        elif f.field == "second":
+            if f.offset != 0:
+                continue
+            reading, fixed = "NOW", ()
+        else:
+            reading, fixed = "R2", (("unit", f.field), ("dir", f.offset))
+        out.append((text, reading, fixed))
+    for p in cldr.relative_patterns(lang):
+        text = p.pattern.lower().strip()
+        if "{0}" not in text or any(c in text for c in "()~") or text in seen:
+            continue
+        if p.field in weekday_fields and p.width == "narrow":
+            continue
+        seen.add(text)
+        form = text.replace("{0}", "{num}")
+        reading = "R3" if p.sign < 0 else "R4"
+        if p.field in weekday_fields:
+            fixed = (("count_weekday", weekday_fields.index(p.field)), ("sign", p.sign))
+        else:
+            fixed = (("unit", p.field), ("sign", p.sign))
+        out.append((form, reading, fixed))
+    return out
+
+
+def _connectives(languages: tuple[str, ...]) -> Connectives:
+    relations: dict[str, dict[str, set[str]]] = defaultdict(lambda: defaultdict(set))
+    joins: dict[str, dict[str, set[str]]] = defaultdict(lambda: defaultdict(set))
+    suffixes: set[str] = set()
+    ordinal_suffixes: set[str] = set()
+    for lang in languages:
+        data = load_locale(lang)
+        for relation, phrases in data.connectives.items():
+            for phrase in phrases:
+                key = " ".join(phrase.lower().split())
+                if relation == "range_join":
+                    joins[key][lang].add("join")
+                elif relation == "since_suffix":
+                    suffixes.add(key)
+                    relations[key][lang].add("since_suffix")
+                else:
+                    relations[key][lang].add(relation)
+        ordinal_suffixes.update(data.ordinal_suffixes)
+    before_words = [w for w, langs in relations.items() if any(r - {"since_suffix"} for r in langs.values())]
+    before = re.compile(rf"(?<!\w)(?P<c>{trie_regex(before_words) or '(?!)'})\s+$")
+    join_words = sorted(joins)
+    join_rx = trie_regex(join_words) or "(?!)"
+    join = re.compile(rf"(?:\s+(?P<j>{join_rx})\s+|\s*(?P<dash>-)\s*)")
+    suffix = re.compile(rf"\s+(?P<s>{trie_regex(sorted(suffixes)) or '(?!)'})(?!\w)")
+    osfx = f"(?:{trie_regex(sorted(ordinal_suffixes))})?" if ordinal_suffixes else ""
+    day_end = re.compile(
+        rf"(?:\s+(?P<j>{join_rx})\s+|\s*-\s*)(?:the\s+)?(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?![\w/.:-])"
+        rf"(?:,?\s+(?P<y>(?:19|20)\d\d)(?!\w))?"
+    )
+    day_start = re.compile(
+        rf"(?<!\w)(?:(?P<pre>{trie_regex(before_words) or '(?!)'})\s+)?(?:the\s+)?"
+        rf"(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?:\s+(?P<j>{join_rx})\s+|\s*-\s*)$"
+    )
+    freeze = lambda table: MappingProxyType(  # noqa: E731
+        {k: MappingProxyType({lg: frozenset(v) for lg, v in d.items()}) for k, d in table.items()}
+    )
+    return Connectives(before, join, suffix, day_end, day_start, freeze(relations), freeze(joins))
+
+
+def _drop_subsumed(forms: list[Form]) -> list[Form]:
+    """Leave out CLDR-generated forms that a curated form of the same language already reads
+    the same way (CLDR's "{0} days ago" next to the locale's "{num} {unit} ago")."""
+    curated: dict[str, list[Form]] = defaultdict(list)
+    for form in forms:
+        if not form.fixed:
+            curated[form.lang].append(form)
+    kept = []
+    for form in forms:
+        if form.fixed and form.reading != "NOW":
+            sample = form.source.replace("{num}", "3")
+            if "{" not in sample and any(
+                (m := other.regex.fullmatch(sample)) is not None and other.reading == form.reading
+                for other in curated[form.lang]
+            ):
+                continue
+        kept.append(form)
+    return kept
+
+
+@functools.lru_cache(maxsize=64)
+def scanner_for(languages: tuple[str, ...]) -> Scanner:
+    """The scanner of ``languages`` (built once per tuple and cached)."""
+    lexicons = {lang: lexicon(lang) for lang in languages}
+    forms: list[Form] = []
+    order = 0
+    root_done = False
+    for lang in languages:
+        data = load_locale(lang)
+        lex = lexicons[lang]
+        where = f"locales/{lang}.toml [forms]"
+        for reading, sources in data.forms.items():
+            for source in sources:
+                forms.append(compile_form(source, lex, reading, order, where=f"{where} {reading}"))
+                order += 1
+        for source, reading, fixed in cldr_forms(lang):
+            forms.append(compile_form(source, lex, reading, order, fixed, where=f"CLDR {lang}"))
+            order += 1
+        if not root_done:
+            root_done = True
+            root_lex = Lexicon(
+                lang="und", spaces=True, words=MappingProxyType({}), regex=lex.regex,
+                triggers=frozenset(), ambiguous=frozenset(), not_temporal=frozenset(),
+                case_marks_names=False,
+            )
+            for reading, sources in data.root_forms.items():
+                for source in sources:
+                    forms.append(compile_form(source, root_lex, reading, order, where="locales/root.toml"))
+                    order += 1
+    forms = _drop_subsumed(forms)
+    # Forms with the same set of first characters share one expression, compiled once.
+    by_firsts: dict[frozenset[str], list[Form]] = defaultdict(list)
+    for form in forms:
+        by_firsts[form.first_chars].append(form)
+    index_lists: dict[str, list[Bucket]] = defaultdict(list)
+    for firsts, group in by_firsts.items():
+        group.sort(key=lambda f: (-f.tokens, f.order))
+        pattern = "|".join(f"(?P<{f.group}>{f.regex.pattern})" for f in group)
+        bucket = Bucket(re.compile(pattern), MappingProxyType({f.group: f for f in group}))
+        for ch in firsts:
+            index_lists[ch].append(bucket)
+    index = {ch: tuple(b) for ch, b in index_lists.items()}
+    # Words of CLDR phrases without slots ("now") trigger too.
+    extra = {max(f.source.split(), key=len) for f in forms if f.fixed == () and f.reading == "NOW"}
+    spaced = sorted({t for lex in lexicons.values() if lex.spaces for t in lex.triggers} | extra)
+    unspaced = sorted({t for lex in lexicons.values() if not lex.spaces for t in lex.triggers})
+    parts = [r"\d"]
+    if spaced:
+        parts.append(rf"(?<!\w){trie_regex(spaced)}(?!\w)")
+    if unspaced:
+        parts.append(trie_regex(unspaced))
+    trigger = re.compile("|".join(parts))
+    return Scanner(
+        languages=languages,
+        trigger=trigger,
+        index=MappingProxyType(index),
+        lexicons=MappingProxyType(lexicons),
+        word_start=re.compile(r"(?<!\w)\w"),
+        connectives=_connectives(languages),
+        forms=tuple(forms),
+    )
