@@ -159,6 +159,7 @@ class DateRef(Meaning):
     week: int | None = None
     day: int | None = None
     alternate: "DateRef | None" = None
+    order: str | None = None  # MDY / DMY / YMD for a numeric date
 
 
 @dataclass(frozen=True, slots=True)

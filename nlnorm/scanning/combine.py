@@ -128,7 +128,8 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
                 i += 1
                 continue
             if "due" in pre_rel:
-                out.append(replace(inner, span=Span(start, a.span.end), weak=False))
+                # "due" stays in the question: it says which column the date belongs to.
+                out.append(replace(inner, weak=False))
                 i += 1
                 continue
             if "from" in pre_rel:

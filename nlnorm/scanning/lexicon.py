@@ -149,6 +149,7 @@ def lexicon(lang: str) -> Lexicon:
         put("num", word, number)
     for word, number in data.ordinals.items():
         put("ordinal", word, number)
+        put("ordinal_half", word, number)
     for grain, forms in data.units.items():
         for form in forms:
             put("unit", form, grain)
@@ -174,7 +175,7 @@ def lexicon(lang: str) -> Lexicon:
     num_words = regex.get("num")
     regex["num"] = r"(?:\d{1,3}" + (f"|{num_words}" if num_words else "") + ")"
     for cls in ("month", "month_wide", "month_abbr", "weekday", "weekday_abbr", "relday",
-                "dayperiod", "unit", "dir", "ordinal", "weekend", "to_date", "dayperiod_phrase"):
+                "dayperiod", "unit", "dir", "ordinal", "ordinal_half", "weekend", "to_date", "dayperiod_phrase"):
         regex.setdefault(cls, "(?!)")
 
     triggers: set[str] = set()

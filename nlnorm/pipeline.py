@@ -1,0 +1,114 @@
+"""The public entry points: run the stages in order.
+
+``STAGES`` names the pipeline; each stage is a pure function callable on its own::
+
+    prepare(text) -> Prepared
+    scan(prepared, ctx) -> tuple[Candidate, ...]
+    parse(candidates, ctx) -> tuple[Parsed, ...]
+    resolve(parsed, ctx) -> tuple[Resolved, ...]
+    annotate(prepared, resolved, ctx) -> Result
+"""
+
+from __future__ import annotations
+
+from collections.abc import Iterable, Iterator, Mapping
+from typing import Any
+
+from .context import Context
+from .errors import InputError, NlnormError
+from .parsing import parse
+from .preparing import prepare
+from .resolution import resolve
+from .rewriting import annotate
+from .scanning import scan
+from .schema import Result
+
+__all__ = ["STAGES", "normalize", "normalize_many", "prepare", "scan", "parse", "resolve", "annotate"]
+
+STAGES = (prepare, scan, parse, resolve, annotate)
+
+_CONTEXT_FIELDS = ("now", "tz", "week_start", "locale", "languages", "bias", "window_reading",
+                   "weekday_reading", "date_order")
+
+
+def normalize(text: str, ctx: Context, id: object = None) -> Result:
+    """Find and resolve every time phrase of ``text`` against ``ctx``.
+
+    >>> ctx = Context.at("2026-12-02T10:00", tz="Europe/Berlin")
+    >>> r = normalize("which bugs were created last week", ctx)
+    >>> m = r.mentions[0]
+    >>> m.text, m.value, m.start, m.end
+    ('last week', '2026-W48', '2026-11-23T00:00:00+01:00', '2026-11-30T00:00:00+01:00')
+    >>> r.rewritten
+    'which bugs were created from 2026-11-23 to 2026-11-29 inclusive'
+    """
+    prepared = prepare(text)
+    candidates = scan(prepared, ctx)
+    resolved = resolve(parse(candidates, ctx), ctx) if candidates else ()
+    return annotate(prepared, resolved, ctx, id=id)
+
+
+def normalize_many(
+    items: Iterable[str | Mapping[str, Any]], ctx: Context
+) -> Iterator[Result]:
+    """Normalize many questions lazily, one :class:`Result` per item, in order.
+
+    An item is a string, or a mapping with ``text`` and optionally ``id`` and any context field
+    (``now``, ``tz``, ``week_start``, ``locale``, ``lang``/``languages``...) that overrides
+    ``ctx`` for that item. A bad item gives a result whose ``error`` says what was wrong; the
+    rest go on.
+
+    >>> ctx = Context.at("2026-12-02T10:00", tz="Europe/Berlin")
+    >>> [r.error or r.mentions[0].value for r in normalize_many(["today", {"text": "x", "tz": "Mars/Base"}], ctx)]
+    ['2026-12-02', "tz='Mars/Base' is not an IANA time zone"]
+    """
+    cache: dict[tuple[tuple[str, Any], ...], Context] = {}
+    for item in items:
+        item_id: object = None
+        try:
+            if isinstance(item, str):
+                yield normalize(item, ctx)
+                continue
+            if not isinstance(item, Mapping):
+                raise InputError(f"expected a string or an object with 'text', got {type(item).__name__}")
+            item_id = item.get("id")
+            text = item.get("text")
+            if text is None:
+                raise InputError("missing field 'text' (the question to normalize)")
+            if not isinstance(text, str):
+                raise InputError(f"field 'text' must be a string, got {type(text).__name__}")
+            overrides = _overrides(item)
+            if overrides:
+                key = tuple(sorted((k, str(v)) for k, v in overrides.items()))
+                local = cache.get(key)
+                if local is None:
+                    local = context_with(ctx, overrides)
+                    if len(cache) < 1024:
+                        cache[key] = local
+            else:
+                local = ctx
+            yield normalize(text, local, id=item_id)
+        except NlnormError as exc:
+            yield Result(id=item_id, text=item.get("text") if isinstance(item, Mapping) and isinstance(item.get("text"), str) else None, error=str(exc))
+
+
+def _overrides(item: Mapping[str, Any]) -> dict[str, Any]:
+    out: dict[str, Any] = {}
+    for key in _CONTEXT_FIELDS:
+        if key in item and item[key] is not None:
+            out[key] = item[key]
+    if "lang" in item and item["lang"] is not None:
+        out["languages"] = item["lang"]
+    return out
+
+
+def context_with(ctx: Context, overrides: Mapping[str, Any]) -> Context:
+    """``ctx`` with some fields replaced; a new ``tz`` without a new ``now`` keeps the instant."""
+    data: dict[str, Any] = ctx.model_dump()
+    changes = dict(overrides)
+    if "tz" in changes and "now" not in changes:
+        data["now"] = ctx.now
+    if "locale" in changes and "week_start" not in changes:
+        data["week_start"] = None
+    data.update(changes)
+    return Context.model_validate(data)

@@ -1,0 +1,68 @@
+"""Helpers shared by the resolvers: intervals from local dates, values, notes."""
+
+from __future__ import annotations
+
+from datetime import date, datetime, timedelta
+from typing import TYPE_CHECKING
+
+from ..calendars import period_value, start_of_day
+from ..model import Grain, Interval, Reading
+
+if TYPE_CHECKING:
+    from ..context import Context
+
+__all__ = ["dates", "instants", "reading", "iso", "open_value", "WEEKDAY_NAMES", "Outcome"]
+
+WEEKDAY_NAMES = ("Monday", "Tuesday", "Wednesday", "Thursday", "Friday", "Saturday", "Sunday")
+
+#: A resolver's answer: the chosen reading and the other plausible ones.
+Outcome = tuple[Reading, tuple[Reading, ...]]
+
+
+def iso(moment: datetime | None) -> str:
+    """ISO 8601 with seconds and the UTC offset (``2026-11-23T00:00:00+01:00``); ``..`` when
+    unbounded, as ISO 8601-2 writes an open interval end."""
+    if moment is None:
+        return ".."
+    return moment.isoformat(timespec="seconds") if moment.microsecond == 0 else moment.isoformat()
+
+
+def dates(first: date, end: date, grain: Grain, ctx: "Context", value: str | None = None) -> Interval:
+    """The interval of local dates ``[first, end)`` in the context's zone.
+
+    ``value`` defaults to the period's ISO name when ``[first, end)`` is one whole period of
+    ``grain``, else ``first/PnD``.
+    """
+    tz = ctx.zone
+    if value is None:
+        try:
+            value = period_value(first, grain, ctx.first_weekday)
+        except ValueError:
+            value = f"{first.isoformat()}/P{(end - first).days}D"
+        if grain is Grain.DAY and (end - first).days != 1:
+            value = f"{first.isoformat()}/P{(end - first).days}D"
+    return Interval(start_of_day(first, tz), start_of_day(end, tz), grain, value)
+
+
+def instants(start: datetime | None, end: datetime | None, grain: Grain) -> Interval:
+    """An interval of instants, valued ``start/end`` (ISO 8601 interval, ``..`` if open)."""
+    return Interval(start, end, grain, f"{iso(start)}/{iso(end)}")
+
+
+def open_value(start: datetime | None, end: datetime | None, day_aligned: bool) -> str:
+    """The value of a half-bounded interval: ``2026-03-01/..`` or ``../2026-03-01T00:00:00+01:00``."""
+    if start is not None and end is None and day_aligned:
+        return f"{start.date().isoformat()}/.."
+    return f"{iso(start)}/{iso(end)}"
+
+
+def reading(interval: Interval, rid: str, note: str, policy: str | None = None) -> Reading:
+    return Reading(interval, rid, note, policy)
+
+
+def week_name(ctx: "Context") -> str:
+    return f"weeks start on {ctx.week_start}"
+
+
+def day_after(d: date, n: int = 1) -> date:
+    return d + timedelta(days=n)

@@ -1,0 +1,137 @@
+"""Annotation: resolved phrases -> the intermediate form (mentions, rewritten, template).
+
+The rewritten question states every interval in words a reader and a model cannot misread:
+ISO dates, and whether the last day is included ("from 2026-11-23 to 2026-11-29 inclusive"),
+or for times of day the exclusive end ("up to but not including 2026-12-02T12:00:00+01:00").
+"""
+
+from __future__ import annotations
+
+from datetime import datetime
+from typing import TYPE_CHECKING
+
+from .calendars import start_of_day
+from .model import Interval, Kind, Reading, Resolved
+from .preparing import Prepared
+from .resolution.common import iso
+from .schema import Alternative, Mention, Reference, Result, Slot, Template
+
+if TYPE_CHECKING:
+    from .context import Context
+
+__all__ = ["annotate", "explicit", "reference"]
+
+
+def _day_aligned(moment: datetime) -> bool:
+    return moment == start_of_day(moment.date(), moment.tzinfo)  # type: ignore[arg-type]
+
+
+def explicit(interval: Interval, kind: Kind = Kind.RANGE) -> str:
+    """Plain, unambiguous wording of an interval.
+
+    >>> from nlnorm.context import Context
+    >>> from nlnorm.calendars import start_of_day
+    >>> from datetime import date
+    >>> from nlnorm.model import Grain
+    >>> tz = Context.at("2026-12-02T10:00", tz="Europe/Berlin").zone
+    >>> explicit(Interval(start_of_day(date(2026, 11, 23), tz), start_of_day(date(2026, 11, 30), tz), Grain.WEEK, "2026-W48"))
+    'from 2026-11-23 to 2026-11-29 inclusive'
+    """
+    start, end = interval.start, interval.end
+    if kind is Kind.DURATION:
+        return f"a duration of {interval.value}"
+    if kind is Kind.INSTANT and start is not None:
+        return f"at {iso(start)}"
+    if start is not None and end is not None:
+        if _day_aligned(start) and _day_aligned(end):
+            last = _last_day(end)
+            if last <= start.date():
+                return f"on {start.date().isoformat()}"
+            return f"from {start.date().isoformat()} to {last.isoformat()} inclusive"
+        return f"from {iso(start)} up to but not including {iso(end)}"
+    if start is not None:
+        if _day_aligned(start):
+            return f"on or after {start.date().isoformat()}"
+        return f"at or after {iso(start)}"
+    if end is not None:
+        if _day_aligned(end):
+            return f"before {end.date().isoformat()}"
+        return f"before {iso(end)}"
+    return "at any time"
+
+
+def _last_day(end: datetime):  # type: ignore[no-untyped-def]
+    from datetime import timedelta
+
+    return end.date() - timedelta(days=1)
+
+
+def _alternative(r: Reading) -> Alternative:
+    iv = r.interval
+    return Alternative(
+        start=None if iv.start is None else iso(iv.start),
+        end=None if iv.end is None else iso(iv.end),
+        value=iv.value,
+        grain=iv.grain.value,
+        reading=r.reading,
+        policy=r.policy,
+        note=r.note,
+    )
+
+
+def reference(ctx: "Context") -> Reference:
+    return Reference(now=iso(ctx.now), tz=ctx.tz, week_start=str(ctx.week_start),
+                     locale=ctx.locale, languages=ctx.languages)
+
+
+def annotate(prepared: Prepared, resolved: tuple[Resolved, ...], ctx: "Context",
+             id: object = None) -> Result:
+    """Build the :class:`~nlnorm.schema.Result` of one question."""
+    original = prepared.original
+    mentions: list[Mention] = []
+    rewritten: list[str] = []
+    template: list[str] = []
+    slots: dict[str, Slot] = {}
+    cursor = 0
+    for index, r in enumerate(resolved, start=1):
+        start, end = prepared.to_original(r.candidate.span.start, r.candidate.span.end)
+        iv = r.chosen.interval
+        s = None if iv.start is None else iso(iv.start)
+        e = None if iv.end is None else iso(iv.end)
+        if r.kind is Kind.INSTANT:
+            e = s
+        mentions.append(
+            Mention(
+                text=original[start:end],
+                char_start=start,
+                char_end=end,
+                kind=r.kind.value,
+                start=s,
+                end=e,
+                grain=iv.grain.value,
+                value=iv.value,
+                lang=r.candidate.lang,
+                reading=r.chosen.reading,
+                note=r.chosen.note,
+                confidence=r.candidate.confidence,
+                alternatives=tuple(_alternative(a) for a in r.alternatives),
+            )
+        )
+        name = f"t{index}"
+        rewritten.append(original[cursor:start])
+        rewritten.append(explicit(iv, r.kind))
+        template.append(original[cursor:start])
+        template.append("{" + name + "}")
+        slots[name] = Slot(start=s, end=e, value=iv.value, kind=r.kind.value, grain=iv.grain.value)
+        cursor = end
+    rewritten.append(original[cursor:])
+    template.append(original[cursor:])
+    return Result(
+        id=id,
+        text=original,
+        reference=reference(ctx),
+        mentions=tuple(mentions),
+        rewritten="".join(rewritten),
+        template=Template(text="".join(template), slots=slots),
+        error=None,
+    )

@@ -1,0 +1,96 @@
+"""The intermediate form: what nlnorm returns for each question, as pydantic models.
+
+``docs/schema.json`` is generated from :class:`Result` (``nlnorm schema``) and checked by the
+tests, so the published schema cannot drift from the code.
+"""
+
+from __future__ import annotations
+
+from typing import Any
+
+from pydantic import BaseModel, ConfigDict, Field
+
+__all__ = ["Alternative", "Mention", "Slot", "Template", "Reference", "Result"]
+
+
+class _Out(BaseModel):
+    model_config = ConfigDict(frozen=True, extra="forbid")
+
+
+class Alternative(_Out):
+    """Another plausible reading of a mention, and the context policy that would select it."""
+
+    start: str | None = Field(description="inclusive start, ISO 8601 with UTC offset; null if unbounded")
+    end: str | None = Field(description="exclusive end, ISO 8601 with UTC offset; null if unbounded")
+    value: str = Field(description="ISO 8601 form of the alternative")
+    grain: str
+    reading: str = Field(description="the reading id (R1-R23) of this alternative")
+    policy: str | None = Field(
+        description="the context setting that selects this reading, e.g. 'bias=future'; null "
+        "when no setting does (reword the question instead)"
+    )
+    note: str = Field(description="how the phrase is read this way, in plain words")
+
+
+class Mention(_Out):
+    """One phrase of the question with the explicit value it stands for."""
+
+    text: str = Field(description="the phrase exactly as in the question")
+    char_start: int = Field(description="start index into the question (Python str index)")
+    char_end: int = Field(description="end index (exclusive); text == question[char_start:char_end]")
+    kind: str = Field(description="range | instant | duration | sprint | number | person | value")
+    start: str | None = Field(description="inclusive start, ISO 8601 with UTC offset; null if unbounded")
+    end: str | None = Field(description="exclusive end, ISO 8601 with UTC offset; null if unbounded")
+    grain: str = Field(description="minute | hour | day | week | month | quarter | half | year | sprint")
+    value: str = Field(description="ISO 8601 form: 2026-12-01, 2026-W48, 2026-11, 2026-Q4, 2026-H2, "
+                       "2026, P3D, or an interval start/end ('..' = open)")
+    lang: str = Field(description="language that matched the phrase ('und' for ISO notation)")
+    reading: str = Field(description="the default-reading id it used (R1-R23; see docs/readings.md)")
+    note: str = Field(description="how the phrase was read, in plain words")
+    confidence: float = Field(1.0, description="1.0, lower for a phrase matched with a typo")
+    alternatives: tuple[Alternative, ...] = Field(
+        default=(), description="other plausible readings, each with the policy selecting it"
+    )
+
+
+class Slot(_Out):
+    """The bound values of one template placeholder."""
+
+    start: str | None
+    end: str | None
+    value: str
+    kind: str
+    grain: str
+
+
+class Template(_Out):
+    """The question with each phrase replaced by ``{t1}``, ``{t2}``... and the bound values."""
+
+    text: str
+    slots: dict[str, Slot]
+
+
+class Reference(_Out):
+    """The context the question was resolved against."""
+
+    now: str
+    tz: str
+    week_start: str
+    locale: str
+    languages: tuple[str, ...]
+
+
+class Result(_Out):
+    """Everything nlnorm says about one question."""
+
+    id: Any = Field(None, description="the input line's id, echoed (batch)")
+    text: str | None = Field(description="the question as given")
+    reference: Reference | None = Field(None, description="now, zone and conventions used")
+    mentions: tuple[Mention, ...] = ()
+    rewritten: str | None = Field(
+        None,
+        description="the question with each phrase replaced by explicit ISO dates; says whether "
+        "the last day is included",
+    )
+    template: Template | None = None
+    error: str | None = Field(None, description="null unless the input was bad; then what was wrong")
