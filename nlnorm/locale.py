@@ -26,6 +26,8 @@ RELATIONS = (
     "before",
     "until",
     "within",
+    "on_day",
+    "cue",
     "due",
     "from",
     "between",

@@ -23,7 +23,7 @@ from .rewriting import annotate
 from .scanning import scan
 from .schema import Result
 
-__all__ = ["STAGES", "normalize", "normalize_many", "prepare", "scan", "parse", "resolve", "annotate"]
+__all__ = ["STAGES", "normalize", "normalize_many", "normalize_item", "context_with", "prepare", "scan", "parse", "resolve", "annotate"]
 
 STAGES = (prepare, scan, parse, resolve, annotate)
 
@@ -62,34 +62,45 @@ def normalize_many(
     >>> [r.error or r.mentions[0].value for r in normalize_many(["today", {"text": "x", "tz": "Mars/Base"}], ctx)]
     ['2026-12-02', "tz='Mars/Base' is not an IANA time zone"]
     """
-    cache: dict[tuple[tuple[str, Any], ...], Context] = {}
+    cache: dict[tuple[tuple[str, str], ...], Context] = {}
     for item in items:
-        item_id: object = None
-        try:
-            if isinstance(item, str):
-                yield normalize(item, ctx)
-                continue
-            if not isinstance(item, Mapping):
-                raise InputError(f"expected a string or an object with 'text', got {type(item).__name__}")
-            item_id = item.get("id")
-            text = item.get("text")
-            if text is None:
-                raise InputError("missing field 'text' (the question to normalize)")
-            if not isinstance(text, str):
-                raise InputError(f"field 'text' must be a string, got {type(text).__name__}")
-            overrides = _overrides(item)
-            if overrides:
-                key = tuple(sorted((k, str(v)) for k, v in overrides.items()))
-                local = cache.get(key)
-                if local is None:
-                    local = context_with(ctx, overrides)
-                    if len(cache) < 1024:
-                        cache[key] = local
-            else:
-                local = ctx
-            yield normalize(text, local, id=item_id)
-        except NlnormError as exc:
-            yield Result(id=item_id, text=item.get("text") if isinstance(item, Mapping) and isinstance(item.get("text"), str) else None, error=str(exc))
+        yield normalize_item(item, ctx, cache)
+
+
+def normalize_item(
+    item: str | Mapping[str, Any],
+    ctx: Context,
+    cache: dict[tuple[tuple[str, str], ...], Context] | None = None,
+) -> Result:
+    """Normalize one batch item (see :func:`normalize_many`); never raises for bad input."""
+    item_id: object = None
+    text: object = None
+    try:
+        if isinstance(item, str):
+            return normalize(item, ctx)
+        if not isinstance(item, Mapping):
+            raise InputError(
+                f"expected a JSON object with 'text', got {type(item).__name__}"
+            )
+        item_id = item.get("id")
+        text = item.get("text")
+        if text is None:
+            raise InputError("missing field 'text' (the question to normalize)")
+        if not isinstance(text, str):
+            raise InputError(f"field 'text' must be a string, got {type(text).__name__}")
+        overrides = _overrides(item)
+        local = ctx
+        if overrides:
+            key = tuple(sorted((k, repr(v)) for k, v in overrides.items()))
+            found = cache.get(key) if cache is not None else None
+            if found is None:
+                found = context_with(ctx, overrides)
+                if cache is not None and len(cache) < 1024:
+                    cache[key] = found
+            local = found
+        return normalize(text, local, id=item_id)
+    except NlnormError as exc:
+        return Result(id=item_id, text=text if isinstance(text, str) else None, error=str(exc))
 
 
 def _overrides(item: Mapping[str, Any]) -> dict[str, Any]:

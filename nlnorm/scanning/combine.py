@@ -39,6 +39,11 @@ def _connective_lang(scanner: Scanner, phrase: str, lang: str) -> str:
     return next(iter(table))
 
 
+def _is_day(c: Candidate) -> bool:
+    """A phrase naming one day (a weekday, a date, "the weekend"): "on" goes with it."""
+    return c.reading in ("R1", "R13", "R14", "R15", "R16", "R18", "R23") or _has_day(c)
+
+
 def _has_day(c: Candidate) -> bool:
     return c.reading in _DAY_READINGS and c.slot("day") is not None and c.slot("month") is not None
 
@@ -139,8 +144,12 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
                                          parts=(a,)))
                     i += 1
                     continue
-            if pre_rel & {"within", "from"}:
+            if pre_rel & {"within", "from"} or ("on_day" in pre_rel and _is_day(a)):
                 out.append(replace(a, span=Span(start, a.span.end), weak=False))
+                i += 1
+                continue
+            if pre_rel & {"cue", "on_day"}:
+                out.append(replace(a, weak=False))
                 i += 1
                 continue
         # "March onwards".

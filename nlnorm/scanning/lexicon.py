@@ -56,7 +56,7 @@ def trie_regex(words: list[str] | tuple[str, ...] | frozenset[str], spaces: str 
     magnitude faster on large word lists. A space inside a word matches ``spaces``.
 
     >>> trie_regex(["may", "mayday", "march"])
-    'ma(?:r(?:ch)|y(?:day)?)'
+    'ma(?:rch|y(?:day)?)'
     """
     trie: dict[str, dict] = {}
     for word in words:

@@ -1,0 +1,274 @@
+"""The command line: ``nlnorm normalize``, ``nlnorm batch``, ``nlnorm demo``, ``nlnorm bench``,
+``nlnorm schema``.
+
+This is the only module that reads the system clock, and only when ``--now`` is not given.
+Heavy imports (pydantic, babel, the scanner) happen after the arguments are parsed, so
+``--help`` and argument errors are instant.
+"""
+
+from __future__ import annotations
+
+import argparse
+import json
+import sys
+import time
+from pathlib import Path
+from typing import IO, Any, Sequence
+
+__all__ = ["main"]
+
+DEMO_NOW = "2026-12-02T10:00:00"
+DEMO_TZ = "Europe/Lisbon"
+
+
+def _context_options(p: argparse.ArgumentParser, demo: bool = False) -> None:
+    g = p.add_argument_group("reference context")
+    g.add_argument("--now", help="reference time, ISO 8601 (default: the current time; "
+                   f"for demo {DEMO_NOW})" if demo else "reference time, ISO 8601; a naive time is "
+                   "read in --tz (default: the current time)")
+    g.add_argument("--tz", help="IANA time zone, e.g. Europe/Berlin (default: UTC, or the offset "
+                   "zone of --now)")
+    g.add_argument("--week-start", choices=("monday", "sunday", "saturday"),
+                   help="first day of the week (default: from the locale's CLDR week data)")
+    g.add_argument("--locale", help="CLDR locale, e.g. en_US or en_GB (default: en)")
+    g.add_argument("--lang", help="comma-separated languages to look for (default: en)")
+    g.add_argument("--bias", choices=("past", "future"),
+                   help="which occurrence a date without year means (default: past)")
+    g.add_argument("--window-reading", choices=("rolling", "calendar"),
+                   help="'the past 2 weeks' as a window ending now or whole weeks (default: rolling)")
+    g.add_argument("--weekday-reading", choices=("nearest", "week"),
+                   help="'last Monday' as the nearest one or Monday of last week "
+                   "(default: the language's usage)")
+    g.add_argument("--date-order", choices=("MDY", "DMY", "YMD"),
+                   help="order of numeric dates (default: the locale's CLDR short date format)")
+
+
+def _parser() -> argparse.ArgumentParser:
+    p = argparse.ArgumentParser(
+        prog="nlnorm",
+        description="Rewrite the time phrases of work-tracker questions into explicit intervals.",
+    )
+    sub = p.add_subparsers(dest="command", required=True, metavar="COMMAND")
+    n = sub.add_parser("normalize", help="normalize one question and print its JSON")
+    n.add_argument("text", help="the question")
+    n.add_argument("--indent", type=int, default=2, help="JSON indent (0: one line)")
+    _context_options(n)
+    b = sub.add_parser("batch", help="normalize a JSONL file: one output line per input line")
+    b.add_argument("input", nargs="?", default="-", help="input JSONL (default: stdin)")
+    b.add_argument("-o", "--output", default="-", help="output JSONL (default: stdout)")
+    b.add_argument("--progress", action=argparse.BooleanOptionalAction, default=None,
+                   help="show a progress bar (default: when stderr is a terminal)")
+    _context_options(b)
+    d = sub.add_parser("demo", help="normalize the bundled question log of the demo team and show it")
+    d.add_argument("input", nargs="?", help="a JSONL log (default: examples/demo/questions.jsonl)")
+    d.add_argument("--json", action="store_true", help="print JSONL instead of a table")
+    _context_options(d, demo=True)
+    be = sub.add_parser("bench", help="measure speed and memory on an invented question log")
+    be.add_argument("-n", type=int, default=10_000, help="questions in the log (default 10000)")
+    be.add_argument("--compare", action=argparse.BooleanOptionalAction, default=True,
+                    help="also time dateparser's search_dates on the same questions")
+    be.add_argument("--compare-sample", type=int, default=2_000,
+                    help="questions given to search_dates (default 2000; it is slow)")
+    sub.add_parser("schema", help="print the JSON Schema of the output")
+    return p
+
+
+def _context(args: argparse.Namespace, default_now: str | None = None) -> Any:
+    from .context import Context
+
+    now: Any = args.now or default_now
+    tz = args.tz
+    if now is None:
+        from datetime import datetime
+
+        from .context import zone
+
+        now = datetime.now(zone(tz or "UTC"))  # the one place nlnorm reads the clock
+    fields: dict[str, Any] = {"now": now}
+    if tz:
+        fields["tz"] = tz
+    if default_now and not args.now and not tz:
+        fields["tz"] = DEMO_TZ
+    for name in ("week_start", "locale", "bias", "window_reading", "weekday_reading", "date_order"):
+        value = getattr(args, name, None)
+        if value:
+            fields[name] = value
+    if args.lang:
+        fields["languages"] = args.lang
+    return Context.model_validate(fields)
+
+
+def _fail(message: str) -> int:
+    print(f"nlnorm: error: {message}", file=sys.stderr)
+    return 2
+
+
+def main(argv: Sequence[str] | None = None) -> int:
+    args = _parser().parse_args(argv)
+    from .errors import NlnormError
+
+    try:
+        if args.command == "normalize":
+            return _normalize(args)
+        if args.command == "batch":
+            return _batch(args)
+        if args.command == "demo":
+            return _demo(args)
+        if args.command == "bench":
+            from .bench import run
+
+            return run(n=args.n, compare=args.compare, compare_sample=args.compare_sample)
+        if args.command == "schema":
+            from .schema import Result
+
+            print(json.dumps(Result.model_json_schema(), indent=2, ensure_ascii=False))
+            return 0
+    except NlnormError as exc:
+        return _fail(str(exc))
+    except BrokenPipeError:
+        return 0
+    except OSError as exc:
+        return _fail(f"{exc.filename or ''}: {exc.strerror or exc}")
+    return 2
+
+
+def _normalize(args: argparse.Namespace) -> int:
+    from .pipeline import normalize
+
+    result = normalize(args.text, _context(args))
+    indent = args.indent or None
+    print(result.model_dump_json(indent=indent))
+    return 0
+
+
+def _open_in(name: str) -> IO[str]:
+    if name == "-":
+        return sys.stdin
+    return open(name, encoding="utf-8", newline="")
+
+
+def _open_out(name: str) -> IO[str]:
+    if name == "-":
+        return sys.stdout
+    return open(name, "w", encoding="utf-8")
+
+
+def _batch(args: argparse.Namespace) -> int:
+    ctx = _context(args)
+    source = _open_in(args.input)
+    sink = _open_out(args.output)
+    show = args.progress if args.progress is not None else sys.stderr.isatty()
+    total = None
+    if show and args.input != "-":
+        with open(args.input, "rb") as fh:
+            total = sum(1 for _ in fh)
+    started = time.perf_counter()
+    try:
+        lines, mentions, errors = run_batch(source, sink, ctx, progress=show, total=total)
+    finally:
+        if source is not sys.stdin:
+            source.close()
+        if sink is not sys.stdout:
+            sink.close()
+    elapsed = time.perf_counter() - started
+    print(f"nlnorm batch: {lines} lines, {mentions} mentions, {errors} errors "
+          f"in {elapsed:.2f} s", file=sys.stderr)
+    return 0
+
+
+def run_batch(source: IO[str], sink: IO[str], ctx: Any, progress: bool = False,
+              total: int | None = None) -> tuple[int, int, int]:
+    """Normalize each JSONL line of ``source`` into ``sink``; returns (lines, mentions, errors).
+
+    Exactly one output line per input line, in order; a bad line gets its error and the rest
+    go on.
+    """
+    from .pipeline import normalize_item
+    from .schema import Result
+
+    cache: dict[Any, Any] = {}
+    lines = mentions = errors = 0
+    bar = None
+    if progress:
+        from rich.progress import Progress
+
+        bar = Progress(transient=True)
+        bar.start()
+        task = bar.add_task("normalizing", total=total)
+    try:
+        for number, line in enumerate(source, start=1):
+            lines += 1
+            raw = line.rstrip("\r\n")
+            item: Any
+            try:
+                if not raw.strip():
+                    raise ValueError("empty line; expected a JSON object with 'text'")
+                item = json.loads(raw)
+            except ValueError as exc:
+                message = str(exc) if "empty line" in str(exc) else f"not valid JSON ({exc})"
+                result = Result(id=None, text=None, error=f"line {number}: {message}")
+            else:
+                result = normalize_item(item, ctx, cache) if isinstance(item, dict) else Result(
+                    id=None, text=None,
+                    error=f"line {number}: expected a JSON object with 'text', got {type(item).__name__}")
+                if result.error and not result.error.startswith("line "):
+                    result = result.model_copy(update={"error": f"line {number}: {result.error}"})
+            if result.error:
+                errors += 1
+            mentions += len(result.mentions)
+            sink.write(result.model_dump_json())
+            sink.write("\n")
+            if bar is not None:
+                bar.advance(task)
+    finally:
+        if bar is not None:
+            bar.stop()
+    return lines, mentions, errors
+
+
+def _demo_path(given: str | None) -> Path:
+    if given:
+        return Path(given)
+    here = Path(__file__).resolve().parent
+    for candidate in (here.parent / "examples" / "demo" / "questions.jsonl",
+                      here / "examples" / "demo" / "questions.jsonl"):
+        if candidate.is_file():
+            return candidate
+    from .errors import InputError
+
+    raise InputError("the demo log examples/demo/questions.jsonl was not found; "
+                     "pass a JSONL file: nlnorm demo PATH")
+
+
+def _demo(args: argparse.Namespace) -> int:
+    import io
+
+    path = _demo_path(args.input)
+    ctx = _context(args, default_now=DEMO_NOW)
+    out = io.StringIO()
+    with open(path, encoding="utf-8") as fh:
+        lines, mentions, errors = run_batch(fh, out, ctx)
+    if args.json:
+        sys.stdout.write(out.getvalue())
+        return 0
+    print(f"nlnorm demo: {path.name}, now={ctx.now.isoformat()} tz={ctx.tz} "
+          f"week_start={ctx.week_start} locale={ctx.locale}\n")
+    for raw in out.getvalue().splitlines():
+        result = json.loads(raw)
+        qid = result.get("id") or "-"
+        if result.get("error"):
+            print(f"[{qid}] ERROR {result['error']}\n")
+            continue
+        print(f"[{qid}] {result['text']}")
+        if not result["mentions"]:
+            print("      (no time phrase)")
+        for m in result["mentions"]:
+            print(f"      {m['text']!r} -> {m['value']}  [{m['reading']}: {m['note']}]")
+            for alt in m["alternatives"]:
+                how = alt["policy"] or "reword"
+                print(f"          or {alt['value']} ({how})")
+        if result["mentions"]:
+            print(f"      => {result['rewritten']}")
+        print()
+    print(f"{lines} questions, {mentions} mentions, {errors} errors")
+    return 0
