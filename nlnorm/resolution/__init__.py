@@ -100,7 +100,7 @@ def resolve_meaning(m: Meaning, ctx: "Context", rid: str = "", lang: str = "en")
     if isinstance(m, Duration):
         return relative.duration(m, ctx)
     if isinstance(m, DateRef):
-        return absolute.date_ref(m, ctx, rid)
+        return absolute.date_ref(m, ctx, rid, lang)
     if isinstance(m, WeekdayRef):
         return absolute.weekday(m, ctx, lang)
     if isinstance(m, Bounded):

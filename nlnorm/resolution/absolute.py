@@ -10,6 +10,7 @@ from typing import TYPE_CHECKING
 from ..calendars import add_months, day_span, iso_week_start
 from ..locale import load_locale
 from ..model import DateRef, Grain, Interval, Reading, WeekdayRef
+from ..parsing import _order_for
 from .common import Outcome, WEEKDAY_NAMES, dates, reading
 
 if TYPE_CHECKING:
@@ -54,11 +55,16 @@ def date_ref_interval(ref: DateRef, year: int, ctx: "Context") -> Interval | Non
         return None
 
 
+_REACH = 8
+
+
 def _biased(ref: DateRef, ctx: "Context", bias: str) -> Interval | None:
     """Past bias: the latest such period whose start <= now; future bias: the earliest whose
     end > now. The current period counts for both."""
     now = ctx.now
-    years = range(now.year - 2, now.year + 3)
+    # Wide enough for the rarest fields: ISO week 53 recurs up to 7 years apart, February 29
+    # up to 8 (2096 -> 2104).
+    years = range(now.year - _REACH, now.year + _REACH + 1)
     found = [iv for y in years if (iv := date_ref_interval(ref, y, ctx)) is not None]
     if bias == "past":
         past = [iv for iv in found if iv.start is not None and iv.start <= now]
@@ -81,7 +87,7 @@ def _what(ref: DateRef) -> str:
     return "year"
 
 
-def date_ref(ref: DateRef, ctx: "Context", rid: str) -> Outcome | None:
+def date_ref(ref: DateRef, ctx: "Context", rid: str, lang: str = "en") -> Outcome | None:
     if ref.year is not None:
         interval = date_ref_interval(ref, ref.year, ctx)
         if interval is None:
@@ -91,7 +97,15 @@ def date_ref(ref: DateRef, ctx: "Context", rid: str) -> Outcome | None:
         alts: tuple[Reading, ...] = ()
         if ref.order is not None:
             source = "date_order" if ctx.date_order else f"CLDR short date format of {ctx.locale}"
-            note = f"numeric date read {_ORDER_NAMES[ref.order]} ({source})"
+            preferred = ctx.date_order or _order_for(lang, ctx.locale)
+            if ref.order == preferred:
+                note = f"numeric date read {_ORDER_NAMES[ref.order]} ({source})"
+            else:
+                # The preferred order gives no valid date (13/04/2026 read month first), or
+                # cannot apply (a four-digit first field is a year).
+                only = ", the only valid reading" if ref.alternate is None else ""
+                note = (f"numeric date read {_ORDER_NAMES[ref.order]}{only} "
+                        f"({source} is {_ORDER_NAMES[preferred]}, which does not fit)")
         if ref.alternate is not None:
             other = date_ref_interval(ref.alternate, ref.alternate.year or ref.year, ctx)
             swapped = ref.alternate.order or "DMY"
@@ -138,8 +152,10 @@ def weekday(m: WeekdayRef, ctx: "Context", lang: str) -> Outcome:
         past = day_reading(on_or_before, "R13", f"the most recent {name} on or before today")
         future = day_reading(on_or_after, "R13", f"the first {name} on or after today")
         if m.deadline:
+            # No setting selects the earlier day here: the deadline word decides, whatever the
+            # bias (reword the question to mean it).
             return (reading(future.interval, "R13", future.note + " (after a deadline word)"),
-                    (reading(past.interval, "R13", past.note, "bias=past"),) if past.interval.start != future.interval.start else ())
+                    (reading(past.interval, "R13", past.note, None),) if past.interval.start != future.interval.start else ())
         if ctx.bias == "future":
             return future, ((reading(past.interval, "R13", past.note, "bias=past"),) if on_or_before != on_or_after else ())
         return past, ((reading(future.interval, "R13", future.note, "bias=future"),) if on_or_before != on_or_after else ())

@@ -87,9 +87,12 @@ def rolling(m: Rolling, ctx: "Context") -> Outcome:
     roll = reading(window, rid, f"rolling window of {m.n} {m.grain.value}(s) {side} now")
     cal = reading(whole, rid, f"the {m.n} whole calendar {m.grain.value}(s) "
                               f"{'before' if m.direction < 0 else 'after'} the current one")
+    # On a unit boundary ("the last 2 hours" at 10:00) both readings are the same interval:
+    # then there is no other reading to offer.
+    same = (roll.interval.start, roll.interval.end) == (cal.interval.start, cal.interval.end)
     if ctx.window_reading == "calendar":
-        return cal, (_with_policy(roll, "window_reading=rolling"),)
-    return roll, (_with_policy(cal, "window_reading=calendar"),)
+        return cal, () if same else (_with_policy(roll, "window_reading=rolling"),)
+    return roll, () if same else (_with_policy(cal, "window_reading=calendar"),)
 
 
 def _with_policy(r, policy: str):  # type: ignore[no-untyped-def]
@@ -140,11 +143,15 @@ def weekend(m: WeekendRef, ctx: "Context") -> Outcome:
         return reading(interval, rid, f"{note} (weekend {names}, CLDR week data for {ctx.locale})", policy)
 
     if m.bare:
-        past = current if current is not None else last_ended
-        return span(past, "R23", "the current weekend, else the last one"), (
-            span(upcoming if current is None else upcoming + timedelta(days=7), "R23",
-                 "the coming weekend", "bias=future"),
-        )
+        # "over the weekend": the current weekend on a weekend day; otherwise the bias decides
+        # between the last one and the coming one.
+        if current is not None:
+            return span(current, "R23", "the current weekend"), ()
+        past = span(last_ended, "R23", "the most recent weekend (past bias)")
+        future = span(upcoming, "R23", "the coming weekend (future bias)")
+        if ctx.bias == "future":
+            return future, (reading(past.interval, "R23", past.note, "bias=past"),)
+        return past, (reading(future.interval, "R23", future.note, "bias=future"),)
     if m.offset < 0:
         return span(last_ended, "R23", "the most recent weekend that has ended"), ()
     if m.offset == 0:
