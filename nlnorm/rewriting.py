@@ -7,6 +7,7 @@ or for times of day the exclusive end ("up to but not including 2026-12-02T12:00
 
 from __future__ import annotations
 
+import functools
 from datetime import datetime
 from typing import TYPE_CHECKING
 
@@ -14,7 +15,7 @@ from .calendars import start_of_day
 from .model import Interval, Kind, Reading, Resolved
 from .preparing import Prepared
 from .resolution.common import iso
-from .schema import Alternative, Mention, Reference, Result, Slot, Template
+from .schema import Alternative, Mention, Reference, Result, Slot, Template, built
 
 if TYPE_CHECKING:
     from .context import Context
@@ -68,7 +69,7 @@ def _last_day(end: datetime):  # type: ignore[no-untyped-def]
 
 def _alternative(r: Reading) -> Alternative:
     iv = r.interval
-    return Alternative(
+    return built(Alternative, 
         start=None if iv.start is None else iso(iv.start),
         end=None if iv.end is None else iso(iv.end),
         value=iv.value,
@@ -79,7 +80,9 @@ def _alternative(r: Reading) -> Alternative:
     )
 
 
+@functools.lru_cache(maxsize=256)
 def reference(ctx: "Context") -> Reference:
+    """The context as the output reports it (cached: contexts are frozen)."""
     return Reference(now=iso(ctx.now), tz=ctx.tz, week_start=str(ctx.week_start),
                      locale=ctx.locale, languages=ctx.languages)
 
@@ -88,6 +91,12 @@ def annotate(prepared: Prepared, resolved: tuple[Resolved, ...], ctx: "Context",
              id: object = None) -> Result:
     """Build the :class:`~nlnorm.schema.Result` of one question."""
     original = prepared.original
+    if not resolved:
+        # Values built here are already valid: skip pydantic's validation on the hot path.
+        return built(Result, 
+            id=id, text=original, reference=reference(ctx), mentions=(), rewritten=original,
+            template=built(Template, text=original, slots={}), error=None,
+        )
     mentions: list[Mention] = []
     rewritten: list[str] = []
     template: list[str] = []
@@ -101,7 +110,7 @@ def annotate(prepared: Prepared, resolved: tuple[Resolved, ...], ctx: "Context",
         if r.kind is Kind.INSTANT:
             e = s
         mentions.append(
-            Mention(
+            built(Mention, 
                 text=original[start:end],
                 char_start=start,
                 char_end=end,
@@ -122,16 +131,16 @@ def annotate(prepared: Prepared, resolved: tuple[Resolved, ...], ctx: "Context",
         rewritten.append(explicit(iv, r.kind))
         template.append(original[cursor:start])
         template.append("{" + name + "}")
-        slots[name] = Slot(start=s, end=e, value=iv.value, kind=r.kind.value, grain=iv.grain.value)
+        slots[name] = built(Slot, start=s, end=e, value=iv.value, kind=r.kind.value, grain=iv.grain.value)
         cursor = end
     rewritten.append(original[cursor:])
     template.append(original[cursor:])
-    return Result(
+    return built(Result, 
         id=id,
         text=original,
         reference=reference(ctx),
         mentions=tuple(mentions),
         rewritten="".join(rewritten),
-        template=Template(text="".join(template), slots=slots),
+        template=built(Template, text="".join(template), slots=slots),
         error=None,
     )

@@ -8,6 +8,7 @@ Hours and minutes are elapsed time.
 
 from __future__ import annotations
 
+import functools
 from datetime import date, datetime, time, timedelta, timezone
 from zoneinfo import ZoneInfo
 
@@ -61,6 +62,7 @@ def local_instant(naive: datetime, tz: ZoneInfo) -> datetime:
     return hi.replace(microsecond=0).astimezone(tz)
 
 
+@functools.lru_cache(maxsize=4096)
 def start_of_day(day: date, tz: ZoneInfo) -> datetime:
     """The first instant whose local date is ``day`` (or later, for a day the zone skipped).
 

@@ -8,6 +8,8 @@ from typing import TYPE_CHECKING
 from ..model import Candidate, Span
 from ..preparing import Prepared
 from .combine import combine
+from .forms import _KEY_RUN, CANONICAL_SLOT
+from .lexicon import REGEX_CLASSES
 from .scanner import Scanner, scanner_for
 
 if TYPE_CHECKING:
@@ -34,25 +36,41 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     hits = [m.start() for m in scanner.trigger.finditer(text)]
     if not hits:
         return ()
-    starts = [m.start() for m in scanner.word_start.finditer(text)]
-    positions: set[int] = set()
-    back = scanner.lookback
+    # Forms start at a trigger, at the start of the word holding it ("q3"), or at a leading
+    # word shortly before it ("in the last 3 weeks").
+    positions = set(hits)
     for hit in hits:
-        k = bisect_right(starts, hit)
-        positions.update(starts[max(0, k - back) : k])
-        positions.add(hit)
+        k = hit
+        while k > 0 and text[k - 1].isalnum():
+            k -= 1
+        positions.add(k)
+    leaders = [m.start() for m in scanner.leaders.finditer(text)]
+    if leaders:
+        back = scanner.lookback
+        for hit in hits:
+            k = bisect_right(leaders, hit)
+            j = k
+            while j > 0 and hit - leaders[j - 1] <= back:
+                j -= 1
+            positions.update(leaders[j:k])
     found: list[Candidate] = []
     limit = 0
-    index = scanner.index
+    run = _KEY_RUN.match
     for pos in sorted(positions):
         if pos < limit:
             continue
-        buckets = index.get(text[pos])
-        if not buckets:
-            continue
+        ch = text[pos]
+        keys: tuple[str, ...]
+        if pos and (text[pos - 1].isalnum() or text[pos - 1] == "_"):
+            keys = ("c:" + ch,)  # inside a word: only forms of languages without spaces
+        else:
+            m0 = run(text, pos)
+            word = m0.group() if m0 else ch
+            key = f"#{min(len(word), 4)}" if word[0].isdigit() else word
+            keys = (key, "c:" + ch)
         best = None
         best_key: tuple[int, int, int] | None = None
-        for bucket in buckets:
+        for bucket in (b for k in keys for b in scanner.buckets(k)):
             m = bucket.regex.match(text, pos)
             if m is None:
                 continue
@@ -74,9 +92,6 @@ def _candidate(m, form, scanner: Scanner, prepared: Prepared) -> Candidate:  # t
     lex = scanner.lexicons.get(form.lang) or next(iter(scanner.lexicons.values()))
     slots: list[tuple[str, object]] = list(form.fixed)
     weak = form.weak
-    from .forms import CANONICAL_SLOT
-    from .lexicon import REGEX_CLASSES
-
     for group, cls in form.slots:
         raw = m.group(group)
         if raw is None:

@@ -11,17 +11,19 @@ A form is a phrase pattern written with spaces between tokens::
 - anything else is literal text. Between tokens goes white space (``\\s+``), or optional
   white space in languages written without spaces.
 
-Each form compiles to its own anchored regular expression; the scanner tries the forms whose
-first character fits the position and keeps the longest match.
+A form becomes a regular-expression *pattern* here; the scanner compiles patterns lazily, all
+forms that can start with one character together, because compiling is the expensive part of
+start-up.
 """
 
 from __future__ import annotations
 
+import functools
 import re
 from dataclasses import dataclass
 
 from ..errors import LocaleError
-from .lexicon import REGEX_CLASSES, Lexicon
+from .lexicon import REGEX_CLASSES, TRIGGER_CLASSES, Lexicon
 
 __all__ = ["Form", "compile_form", "CANONICAL_SLOT"]
 
@@ -40,30 +42,71 @@ CANONICAL_SLOT = {
 }
 
 
+@functools.lru_cache(maxsize=4096)
+def _compiled(pattern: str) -> re.Pattern[str]:
+    return re.compile(pattern)
+
+
 @dataclass(frozen=True, slots=True)
 class Form:
-    """A compiled form of one language."""
+    """A form of one language, as a pattern ready to be compiled."""
 
     lang: str
     reading: str
     source: str
-    regex: re.Pattern[str]
+    pattern: str
     slots: tuple[tuple[str, str], ...]  # (regex group, slot class)
     fixed: tuple[tuple[str, object], ...]
     weak: bool
     single: str | None  # the slot class when the form is one bare slot
     first_chars: frozenset[str]
+    first_keys: frozenset[str]  # bucket keys of the texts the form can start with
+    leaders: frozenset[str]  # first words that are not themselves triggers ("the", "in", "last")
     order: int
+    spaced: bool
     tokens: int  # specificity: tokens plus the slots and literal pieces inside them
 
     @property
     def group(self) -> str:
-        """The name of this form's group in a combined expression."""
-        return f"f{self.order}"
+        """The name of the empty group that ends this form's pattern."""
+        return f"f{self.order}_e"
+
+    @property
+    def regex(self) -> re.Pattern[str]:
+        """This form alone, compiled (cached), with the word boundary before it; the scanner
+        uses combined expressions."""
+        prefix = r"(?<!\w)" if self.spaced else ""
+        return _compiled(prefix + self.pattern)
 
 
-def _first_chars_of_words(words: object) -> set[str]:
-    return {w[0] for w in words if w}  # type: ignore[union-attr]
+_KEY_RUN = re.compile(r"[^\W\d_]+|\d+|.", re.S)
+
+#: Lengths of digit runs each numeric slot class can start with.
+_DIGIT_KEYS = {
+    "year": ("#4",), "day": ("#1", "#2"), "day2": ("#2",), "month2": ("#2",), "qnum": ("#1",),
+    "hnum": ("#1",), "weeknum": ("#1", "#2"), "week2": ("#2",), "isoday": ("#1",),
+    "numdate": ("#1", "#2", "#4"), "digits": ("#1", "#2", "#3"), "num": ("#1", "#2", "#3"),
+}
+
+
+def key_of(text: str) -> str:
+    """The bucket key of a text's start: its first run of letters, or ``#n`` for a run of n
+    digits (n capped at 4), or its first character.
+
+    >>> key_of("last week"), key_of("q3"), key_of("2026-w48"), key_of("14th")
+    ('last', 'q', '#4', '#2')
+    """
+    m = _KEY_RUN.match(text)
+    if m is None:
+        return ""
+    run = m.group()
+    if run[0].isdigit():
+        return f"#{min(len(run), 4)}"
+    return run
+
+
+def _first_words(words: object) -> set[str]:
+    return {w.split()[0] for w in words if w.split()}  # type: ignore[union-attr]
 
 
 def compile_form(
@@ -74,7 +117,7 @@ def compile_form(
     fixed: tuple[tuple[str, object], ...] = (),
     where: str = "",
 ) -> Form:
-    """Compile one form of ``lex.lang``.
+    """Translate one form of ``lex.lang`` into a pattern.
 
     Raises:
         LocaleError: the form names an unknown slot class or is empty (message names ``where``).
@@ -87,16 +130,21 @@ def compile_form(
     if not tokens:
         raise LocaleError(f"{where}: empty form {source!r}")
     sep = r"\s+" if lex.spaces else r"\s*"
-    pieces: list[tuple[str, bool, set[str]]] = []  # (regex, optional, first chars)
-    weight = 0  # how specific the form is: tokens plus the slots and literals inside them
+    # (regex, optional, first chars, leader words, first keys)
+    pieces: list[tuple[str, bool, set[str], set[str], set[str]]] = []
     slots: list[tuple[str, str]] = []
+    weight = 0  # how specific the form is: tokens plus the slots and literals inside them
     for token in tokens:
         optional = token.endswith("?") and len(token) > 1
         body = token[:-1] if optional else token
+        leaders: set[str] = set()
+        keys: set[str] = set()
         if body.startswith("(") and body.endswith(")") and "{" not in body:
-            options = [o for o in body[1:-1].split("|") if o]
-            rx = "(?:" + "|".join(re.escape(o.lower()) for o in sorted(options, key=len, reverse=True)) + ")"
-            firsts = {o[0].lower() for o in options}
+            options = [o.lower() for o in body[1:-1].split("|") if o]
+            rx = "(?:" + "|".join(re.escape(o) for o in sorted(options, key=len, reverse=True)) + ")"
+            firsts = {o[0] for o in options}
+            leaders = {o for o in options if o[0].isalpha()}
+            keys = {key_of(o) for o in options}
             weight += 1
         else:
             parts: list[str] = []
@@ -104,6 +152,7 @@ def compile_form(
             for m in _TOKEN_PIECE.finditer(body):
                 weight += 1
                 cls, literal = m.group(1), m.group(2)
+                first_piece = not parts
                 if cls:
                     if cls not in lex.regex:
                         known = ", ".join(sorted(set(lex.regex)))
@@ -113,48 +162,74 @@ def compile_form(
                     group = f"f{order}_{len(slots)}"
                     slots.append((group, cls))
                     parts.append(f"(?P<{group}>{lex.regex[cls]})")
-                    if not parts[:-1]:
+                    if first_piece:
                         if cls in REGEX_CLASSES or cls == "num":
                             firsts |= _DIGITS
-                        if cls in lex.words:
-                            firsts |= _first_chars_of_words(lex.words[cls])
+                        table = lex.words.get(cls, {})
+                        firsts |= {w[0] for w in table if w}
+                        keys |= set(_DIGIT_KEYS.get(cls, ()))
+                        keys |= {key_of(w) for w in table if w}
+                        if cls not in TRIGGER_CLASSES:
+                            leaders |= _first_words(table)
+                        else:
+                            leaders |= {w.split()[0] for w in table if len(w.split()) > 1}
                 else:
-                    parts.append(re.escape(literal.lower()))
-                    if len(parts) == 1:
-                        firsts.add(literal[0].lower())
+                    lowered = literal.lower()
+                    parts.append(re.escape(lowered))
+                    if first_piece:
+                        firsts.add(lowered[0])
+                        keys.add(key_of(lowered))
+                        word = re.match(r"\w+", lowered)
+                        if word and word.end() == len(lowered) and len(parts) == 1 and \
+                                m.end() == len(body):
+                            leaders.add(lowered)
             rx = "".join(parts)
-        pieces.append((rx, optional, firsts))
+        pieces.append((rx, optional, firsts, leaders, keys))
     # Join tokens; an optional token takes its separator with it.
     regex = ""
     first_chars: set[str] = set()
+    first_words: set[str] = set()
+    first_keys: set[str] = set()
     leading = True
     emitted = False  # has a mandatory token been written yet?
-    for rx, optional, firsts in pieces:
+    for rx, optional, firsts, leaders, keys in pieces:
         if leading:
             first_chars |= firsts
+            first_words |= leaders
+            first_keys |= keys
             leading = optional
         if not emitted:
             regex += f"(?:{rx}{sep})?" if optional else rx
             emitted = not optional
         else:
             regex += f"(?:{sep}{rx})?" if optional else f"{sep}{rx}"
-    if lex.spaces:
-        regex = rf"(?<!\w)(?:{regex})(?!\w)"
+    # The end of the form is marked by an empty group: in a combined expression the last group
+    # to close names the form that matched. (The scanner checks the word boundary before a
+    # form itself, so spaced forms need only the one after.)
+    regex = rf"(?:{regex})(?!\w)" if lex.spaces else regex
+    regex += f"(?P<f{order}_e>)"
     single = slots[0][1] if len(tokens) == 1 and len(slots) == 1 and not fixed else None
-    try:
-        compiled = re.compile(regex)
-    except re.error as exc:
-        raise LocaleError(f"{where}: form {source!r} does not compile: {exc}") from None
     return Form(
         lang=lex.lang,
         reading=reading,
         source=source,
-        regex=compiled,
+        pattern=regex,
         slots=tuple(slots),
         fixed=fixed,
         weak=weak,
         single=single,
         first_chars=frozenset(first_chars),
+        first_keys=frozenset(first_keys),
+        leaders=frozenset(first_words),
         order=order,
+        spaced=lex.spaces,
         tokens=weight,
     )
+
+
+def check_pattern(form: Form, where: str) -> None:
+    """Compile ``form`` alone to report a broken pattern with its place (used by the tests)."""
+    try:
+        re.compile(form.pattern)
+    except re.error as exc:
+        raise LocaleError(f"{where}: form {form.source!r} does not compile: {exc}") from None

@@ -39,26 +39,74 @@ class Connectives:
 
 @dataclass(frozen=True, slots=True)
 class Bucket:
-    """All forms that can start with one character, as one expression.
+    """Forms that can start with one character, as one expression.
 
-    Alternatives are ordered longest form first (more tokens), then by file order, so the first
-    alternative that matches is the most specific reading; ``m.lastgroup`` names the form.
+    Alternatives are ordered most specific first (more tokens), then by file order, so the first
+    alternative that matches is the intended reading; ``m.lastgroup`` names the form.
     """
 
     regex: re.Pattern[str]
     forms: Mapping[str, Form]
 
 
+def _bucket(forms: list[Form]) -> Bucket:
+    forms = sorted(forms, key=lambda f: (-f.tokens, f.order))
+    pattern = "|".join(f.pattern for f in forms)
+    return Bucket(re.compile(pattern), MappingProxyType({f.group: f for f in forms}))
+
+
 @dataclass(frozen=True, slots=True)
 class Scanner:
+    """Everything needed to scan text in a set of languages.
+
+    ``buckets(key)`` compiles, on first use, the expressions of the forms that can start with
+    ``key`` (the first run of letters at a position, ``#n`` for n digits, or ``c:`` and a
+    character in languages written without spaces): curated forms from locales/ first, then
+    the CLDR-generated forms they do not already cover. Compiling lazily keeps start-up short:
+    one question needs a few buckets.
+    """
+
     languages: tuple[str, ...]
     trigger: re.Pattern[str]
-    index: Mapping[str, tuple[Bucket, ...]]
+    leaders: re.Pattern[str]
+    curated: Mapping[str, tuple[Form, ...]]
+    generated: Mapping[str, tuple[Form, ...]]
     lexicons: Mapping[str, Lexicon]
-    word_start: re.Pattern[str]
     connectives: Connectives
     forms: tuple[Form, ...]
-    lookback: int = 6
+    _cache: dict[str, tuple[Bucket, ...]]
+    lookback: int = 48  # characters before a trigger in which leading words are tried
+
+    def buckets(self, key: str) -> tuple[Bucket, ...]:
+        found = self._cache.get(key)
+        if found is None:
+            found = self._build(key)
+            self._cache[key] = found
+        return found
+
+    def _build(self, ch: str) -> tuple[Bucket, ...]:
+        curated = list(self.curated.get(ch, ()))
+        generated = list(self.generated.get(ch, ()))
+        out: list[Bucket] = []
+        if curated:
+            first = _bucket(curated)
+            out.append(first)
+            generated = [f for f in generated if not _covered(f, first)]
+        if generated:
+            out.append(_bucket(generated))
+        return tuple(out)
+
+
+def _covered(form: Form, curated: Bucket) -> bool:
+    """Whether a curated form of the same language reads this CLDR phrase the same way."""
+    if form.reading == "NOW" or "{" in form.source.replace("{num}", ""):
+        return False
+    sample = form.source.replace("{num}", "3")
+    m = curated.regex.fullmatch(sample)
+    if m is None:
+        return False
+    other = curated.forms[m.lastgroup]  # type: ignore[index]
+    return other.lang == form.lang and other.reading == form.reading
 
 
 def cldr_forms(lang: str) -> list[tuple[str, str, tuple[tuple[str, object], ...]]]:
@@ -151,26 +199,6 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
     return Connectives(before, join, suffix, day_end, day_start, freeze(relations), freeze(joins))
 
 
-def _drop_subsumed(forms: list[Form]) -> list[Form]:
-    """Leave out CLDR-generated forms that a curated form of the same language already reads
-    the same way (CLDR's "{0} days ago" next to the locale's "{num} {unit} ago")."""
-    curated: dict[str, list[Form]] = defaultdict(list)
-    for form in forms:
-        if not form.fixed:
-            curated[form.lang].append(form)
-    kept = []
-    for form in forms:
-        if form.fixed and form.reading != "NOW":
-            sample = form.source.replace("{num}", "3")
-            if "{" not in sample and any(
-                (m := other.regex.fullmatch(sample)) is not None and other.reading == form.reading
-                for other in curated[form.lang]
-            ):
-                continue
-        kept.append(form)
-    return kept
-
-
 @functools.lru_cache(maxsize=64)
 def scanner_for(languages: tuple[str, ...]) -> Scanner:
     """The scanner of ``languages`` (built once per tuple and cached)."""
@@ -200,35 +228,41 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
                 for source in sources:
                     forms.append(compile_form(source, root_lex, reading, order, where="locales/root.toml"))
                     order += 1
-    forms = _drop_subsumed(forms)
-    # Forms with the same set of first characters share one expression, compiled once.
-    by_firsts: dict[frozenset[str], list[Form]] = defaultdict(list)
+    curated: dict[str, list[Form]] = defaultdict(list)
+    generated: dict[str, list[Form]] = defaultdict(list)
+    leaders: set[str] = set()
     for form in forms:
-        by_firsts[form.first_chars].append(form)
-    index_lists: dict[str, list[Bucket]] = defaultdict(list)
-    for firsts, group in by_firsts.items():
-        group.sort(key=lambda f: (-f.tokens, f.order))
-        pattern = "|".join(f"(?P<{f.group}>{f.regex.pattern})" for f in group)
-        bucket = Bucket(re.compile(pattern), MappingProxyType({f.group: f for f in group}))
-        for ch in firsts:
-            index_lists[ch].append(bucket)
-    index = {ch: tuple(b) for ch, b in index_lists.items()}
+        target = generated if form.fixed else curated
+        if form.spaced:
+            for key in form.first_keys:
+                target[key].append(form)
+        else:
+            for ch in form.first_chars:
+                target["c:" + ch].append(form)
+        leaders |= form.leaders
     # Words of CLDR phrases without slots ("now") trigger too.
     extra = {max(f.source.split(), key=len) for f in forms if f.fixed == () and f.reading == "NOW"}
     spaced = sorted({t for lex in lexicons.values() if lex.spaces for t in lex.triggers} | extra)
     unspaced = sorted({t for lex in lexicons.values() if not lex.spaces for t in lex.triggers})
-    parts = [r"\d"]
+    # A digit that does not continue a number ("2025.1" triggers once); written with the
+    # look-behind after the digit so that the regex engine can skip ahead by character class.
+    parts = [r"\d(?<![\d.,:/]\d)"]
     if spaced:
         parts.append(rf"(?<!\w){trie_regex(spaced)}(?!\w)")
     if unspaced:
         parts.append(trie_regex(unspaced))
     trigger = re.compile("|".join(parts))
+    triggers = set(spaced) | set(unspaced)
+    leader_words = sorted(w for w in leaders if w not in triggers)
+    leader_rx = re.compile(rf"(?<!\w)(?:{trie_regex(leader_words) or '(?!)'})(?!\w)")
     return Scanner(
         languages=languages,
         trigger=trigger,
-        index=MappingProxyType(index),
+        leaders=leader_rx,
+        curated=MappingProxyType({k: tuple(v) for k, v in curated.items()}),
+        generated=MappingProxyType({k: tuple(v) for k, v in generated.items()}),
         lexicons=MappingProxyType(lexicons),
-        word_start=re.compile(r"(?<!\w)\w"),
         connectives=_connectives(languages),
         forms=tuple(forms),
+        _cache={},
     )
