@@ -103,6 +103,7 @@ class LocaleFile(_Strict):
     connectives: dict[Literal[RELATIONS], tuple[str, ...]] = Field(default_factory=dict)  # type: ignore[valid-type]
     ambiguous: WordList = WordList()
     not_temporal: WordList = WordList()
+    quiet: WordList = WordList()
     forms: dict[str, tuple[str, ...]] = Field(default_factory=dict)
     examples: tuple[Example, ...] = ()
 
@@ -130,7 +131,7 @@ class LocaleData:
 
     __slots__ = ("code", "meta", "chain", "_file", "numbers", "ordinals", "ordinal_suffixes",
                  "units", "direction", "relative_day", "day_period_phrases", "weekend",
-                 "to_date", "connectives", "ambiguous", "not_temporal", "forms", "root_forms",
+                 "to_date", "connectives", "ambiguous", "not_temporal", "quiet", "forms", "root_forms",
                  "examples")
 
     def __init__(self, code: str, chain: tuple[str, ...], files: list[LocaleFile]) -> None:
@@ -165,6 +166,7 @@ class LocaleData:
         self.connectives = merged("connectives")
         self.ambiguous = words("ambiguous")
         self.not_temporal = words("not_temporal")
+        self.quiet = words("quiet")
         # Forms of this language and of parents that are languages; root forms are kept apart
         # because they are the same in every language.
         forms: dict[str, tuple[str, ...]] = {}

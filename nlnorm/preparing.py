@@ -60,7 +60,9 @@ def prepare(text: str) -> Prepared:
         raise InputError(f"text must be a string, got {type(text).__name__}")
     if text.isascii():
         folded = text.lower()
-        return Prepared(text, folded.translate(_TRANSLATE), None)
+        if "\t" in folded or "\n" in folded or "\r" in folded:
+            folded = folded.translate(_TRANSLATE)
+        return Prepared(text, folded, None)
     if unicodedata.is_normalized("NFKC", text):
         folded = text.casefold()
         if len(folded) == len(text):

@@ -2,13 +2,14 @@
 
 from __future__ import annotations
 
+import re
 from bisect import bisect_right
 from typing import TYPE_CHECKING
 
 from ..model import Candidate, Span
 from ..preparing import Prepared
 from .combine import combine
-from .forms import _KEY_RUN, CANONICAL_SLOT
+from .forms import CANONICAL_SLOT
 from .lexicon import REGEX_CLASSES
 from .scanner import Scanner, scanner_for
 
@@ -16,6 +17,9 @@ if TYPE_CHECKING:
     from ..context import Context
 
 __all__ = ["scan", "scan_text", "scanner_for", "Scanner"]
+
+# The first two runs at a position: letters, digits, or one other character (see runs_key).
+_PAIR = re.compile(r"([^\W\d_]+|\d+|[^\w\s])\s*([^\W\d_]+|\d+|[^\w\s])?")
 
 
 def scan(prepared: Prepared, ctx: "Context") -> tuple[Candidate, ...]:
@@ -55,34 +59,49 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
             positions.update(leaders[j:k])
     found: list[Candidate] = []
     limit = 0
-    run = _KEY_RUN.match
+    pair = _PAIR.match
+    cache = scanner._cache
+    get = scanner.buckets
+    unspaced = scanner.unspaced
     for pos in sorted(positions):
         if pos < limit:
             continue
-        ch = text[pos]
-        keys: tuple[str, ...]
-        if pos and (text[pos - 1].isalnum() or text[pos - 1] == "_"):
-            keys = ("c:" + ch,)  # inside a word: only forms of languages without spaces
-        else:
-            m0 = run(text, pos)
-            word = m0.group() if m0 else ch
-            key = f"#{min(len(word), 4)}" if word[0].isdigit() else word
-            keys = (key, "c:" + ch)
+        keys: list[object] = []
+        if not pos or not (text[pos - 1].isalnum() or text[pos - 1] == "_"):
+            m0 = pair(text, pos)
+            if m0 is not None:
+                first, second = m0.group(1), m0.group(2) or ""
+                if first[0].isdigit():
+                    first = f"#{min(len(first), 4)}"
+                if second and second[0].isdigit():
+                    second = f"#{min(len(second), 4)}"
+                keys.append((first, second))
+                if second:
+                    keys.append((first, ""))
+        if unspaced:
+            keys.append("c:" + text[pos])
         best = None
-        best_key: tuple[int, int, int] | None = None
-        for bucket in (b for k in keys for b in scanner.buckets(k)):
-            m = bucket.regex.match(text, pos)
-            if m is None:
-                continue
-            form = bucket.forms[m.lastgroup]  # type: ignore[index]
-            key = (m.end(), form.tokens, -form.order)
-            if best_key is None or key > best_key:
-                best, best_key = (m, form), key
+        best_end = -1
+        for k in keys:
+            buckets = cache.get(k)
+            if buckets is None:
+                buckets = get(k)
+            for bucket in buckets:
+                m = bucket.regex.match(text, pos)
+                if m is None:
+                    continue
+                end = m.end()
+                if end > best_end:
+                    best, best_end = (m, bucket.forms[m.lastgroup]), end  # type: ignore[index]
+                elif end == best_end and best is not None:
+                    form = bucket.forms[m.lastgroup]  # type: ignore[index]
+                    if (form.tokens, -form.order) > (best[1].tokens, -best[1].order):
+                        best = (m, form)
         if best is None:
             continue
         m, form = best
         found.append(_candidate(m, form, scanner, prepared))
-        limit = m.end()
+        limit = best_end
     if not found:
         return ()
     return combine(prepared, found, scanner)

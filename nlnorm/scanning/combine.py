@@ -67,9 +67,16 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
     out: list[Candidate] = []
     i = 0
     n = len(found)
+    last_words = conn.last_words
     while i < n:
         a = found[i]
-        pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)
+        # Cheap test first: is the word before the phrase the end of some connective?
+        k = a.span.start - 1
+        pre = None
+        if k > 0 and text[k] == " ":
+            j = text.rfind(" ", 0, k) + 1
+            if text[j:k] in last_words:
+                pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)
         pre_word = pre.group("c") if pre else None
         pre_rel = _relations(scanner, pre_word, a.lang) if pre_word else frozenset()
 

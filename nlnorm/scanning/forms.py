@@ -60,7 +60,8 @@ class Form:
     weak: bool
     single: str | None  # the slot class when the form is one bare slot
     first_chars: frozenset[str]
-    first_keys: frozenset[str]  # bucket keys of the texts the form can start with
+    first_keys: frozenset[str]  # first runs of the texts the form can start with
+    pair_keys: frozenset[tuple[str, str]] | None  # first two runs; "" second = anything
     leaders: frozenset[str]  # first words that are not themselves triggers ("the", "in", "last")
     order: int
     spaced: bool
@@ -87,6 +88,62 @@ _DIGIT_KEYS = {
     "hnum": ("#1",), "weeknum": ("#1", "#2"), "week2": ("#2",), "isoday": ("#1",),
     "numdate": ("#1", "#2", "#4"), "digits": ("#1", "#2", "#3"), "num": ("#1", "#2", "#3"),
 }
+
+
+#: Sample texts of each numeric slot class, enough to know which runs it can start with.
+_DIGIT_SAMPLES = {
+    "year": ("2000",), "day": ("1", "10"), "day2": ("10",), "month2": ("10",), "qnum": ("1",),
+    "hnum": ("1",), "weeknum": ("1", "10"), "week2": ("10",), "isoday": ("1",),
+    "numdate": ("1/1/2000", "10/10/2000", "2000/1/1", "1.1.2000", "10.10.2000", "2000.1.1",
+                "1/1/20", "10/10/20", "1.1.20", "10.10.20"),
+    "digits": ("1", "10", "100"), "num": ("1", "10", "100"),
+}
+_RUN = re.compile(r"[^\W\d_]+|\d+|[^\w\s]")
+_MAX_SAMPLES = 20_000
+
+
+def runs_key(text: str, pos: int = 0) -> tuple[str, str]:
+    """The first two runs at ``pos`` (letters, digits as ``#n``, or one other character),
+    white space skipped: the key of the bucket of forms to try there.
+
+    >>> runs_key("in the last 3 weeks"), runs_key("2026-w48"), runs_key("march")
+    (('in', 'the'), ('#4', '-'), ('march', ''))
+    """
+    first = second = ""
+    for m in _RUN.finditer(text, pos):
+        run = m.group()
+        key = f"#{min(len(run), 4)}" if run[0].isdigit() else run
+        if first:
+            second = key
+            break
+        first = key
+    return first, second
+
+
+def _sample_keys(token_samples: list[tuple[list[str], bool]]) -> set[tuple[str, str]] | None:
+    """Every (first run, second run) a form can start with, from sample texts of its tokens;
+    ``None`` when there are too many combinations to list."""
+    keys: set[tuple[str, str]] = set()
+    budget = [_MAX_SAMPLES]
+
+    def walk(index: int, prefix: str) -> bool:
+        if budget[0] <= 0:
+            return False
+        runs = _RUN.findall(prefix)
+        if len(runs) >= 2 or index == len(token_samples):
+            budget[0] -= 1
+            k = runs_key(prefix)
+            keys.add(k if index < len(token_samples) or k[1] else (k[0], ""))
+            return True
+        samples, optional = token_samples[index]
+        if optional and not walk(index + 1, prefix):
+            return False
+        for sample in samples:
+            if not walk(index + 1, f"{prefix} {sample}" if prefix else sample):
+                return False
+        return True
+
+    return keys if walk(0, "") else None
 
 
 def key_of(text: str) -> str:
@@ -133,6 +190,7 @@ def compile_form(
     # (regex, optional, first chars, leader words, first keys)
     pieces: list[tuple[str, bool, set[str], set[str], set[str]]] = []
     slots: list[tuple[str, str]] = []
+    token_samples: list[tuple[list[str], bool]] = []
     weight = 0  # how specific the form is: tokens plus the slots and literals inside them
     for token in tokens:
         optional = token.endswith("?") and len(token) > 1
@@ -145,10 +203,12 @@ def compile_form(
             firsts = {o[0] for o in options}
             leaders = {o for o in options if o[0].isalpha()}
             keys = {key_of(o) for o in options}
+            token_samples.append((options, optional))
             weight += 1
         else:
             parts: list[str] = []
             firsts = set()
+            samples = [""]
             for m in _TOKEN_PIECE.finditer(body):
                 weight += 1
                 cls, literal = m.group(1), m.group(2)
@@ -159,6 +219,11 @@ def compile_form(
                         raise LocaleError(
                             f"{where}: form {source!r} uses unknown slot {{{cls}}} (known: {known})"
                         )
+                    piece_samples = list(_DIGIT_SAMPLES.get(cls, ()))
+                    piece_samples += [w for w in lex.words.get(cls, {}) if w]
+                    if cls == "day":
+                        piece_samples += [d + sfx for d in ("1", "10") for sfx in lex.ordinal_suffixes]
+                    samples = [a + b for a in samples for b in piece_samples][:_MAX_SAMPLES]
                     group = f"f{order}_{len(slots)}"
                     slots.append((group, cls))
                     parts.append(f"(?P<{group}>{lex.regex[cls]})")
@@ -175,6 +240,7 @@ def compile_form(
                             leaders |= {w.split()[0] for w in table if len(w.split()) > 1}
                 else:
                     lowered = literal.lower()
+                    samples = [a + lowered for a in samples]
                     parts.append(re.escape(lowered))
                     if first_piece:
                         firsts.add(lowered[0])
@@ -184,6 +250,7 @@ def compile_form(
                                 m.end() == len(body):
                             leaders.add(lowered)
             rx = "".join(parts)
+            token_samples.append((samples, optional))
         pieces.append((rx, optional, firsts, leaders, keys))
     # Join tokens; an optional token takes its separator with it.
     regex = ""
@@ -209,6 +276,7 @@ def compile_form(
     regex = rf"(?:{regex})(?!\w)" if lex.spaces else regex
     regex += f"(?P<f{order}_e>)"
     single = slots[0][1] if len(tokens) == 1 and len(slots) == 1 and not fixed else None
+    pair_keys = _sample_keys(token_samples) if lex.spaces else None
     return Form(
         lang=lex.lang,
         reading=reading,
@@ -220,6 +288,7 @@ def compile_form(
         single=single,
         first_chars=frozenset(first_chars),
         first_keys=frozenset(first_keys),
+        pair_keys=frozenset(pair_keys) if pair_keys is not None else None,
         leaders=frozenset(first_words),
         order=order,
         spaced=lex.spaces,

@@ -95,6 +95,7 @@ class Lexicon:
     ambiguous: frozenset[str]
     not_temporal: frozenset[str]
     case_marks_names: bool
+    ordinal_suffixes: tuple[str, ...] = ()
 
     def value(self, cls: str, text: str) -> object:
         """The value of ``text`` (as matched) in word class ``cls``."""
@@ -191,4 +192,5 @@ def lexicon(lang: str) -> Lexicon:
         ambiguous=data.ambiguous,
         not_temporal=data.not_temporal,
         case_marks_names=data.meta.case_marks_names,
+        ordinal_suffixes=tuple(suffixes),
     )

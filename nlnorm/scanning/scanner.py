@@ -35,6 +35,7 @@ class Connectives:
     day_start: re.Pattern[str]  # "3 -" before "17 March" (search, endpos)
     relations: Mapping[str, Mapping[str, frozenset[str]]]  # phrase -> lang -> relations
     joins: Mapping[str, Mapping[str, frozenset[str]]]
+    last_words: frozenset[str]  # the last word of every connective before a phrase
 
 
 @dataclass(frozen=True, slots=True)
@@ -50,7 +51,8 @@ class Bucket:
 
 
 def _bucket(forms: list[Form]) -> Bucket:
-    forms = sorted(forms, key=lambda f: (-f.tokens, f.order))
+    # Most specific first; on a tie curated forms (no fixed slots) before CLDR-generated ones.
+    forms = sorted(forms, key=lambda f: (-f.tokens, bool(f.fixed), f.order))
     pattern = "|".join(f.pattern for f in forms)
     return Bucket(re.compile(pattern), MappingProxyType({f.group: f for f in forms}))
 
@@ -60,8 +62,9 @@ class Scanner:
     """Everything needed to scan text in a set of languages.
 
     ``buckets(key)`` compiles, on first use, the expressions of the forms that can start with
-    ``key`` (the first run of letters at a position, ``#n`` for n digits, or ``c:`` and a
-    character in languages written without spaces): curated forms from locales/ first, then
+    ``key``: the first two runs at a position (letters, ``#n`` for n digits, or one other
+    character; ``""`` as the second run for forms that may be followed by anything), or ``c:``
+    and a character in languages written without spaces: curated forms from locales/ first, then
     the CLDR-generated forms they do not already cover. Compiling lazily keeps start-up short:
     one question needs a few buckets.
     """
@@ -69,32 +72,32 @@ class Scanner:
     languages: tuple[str, ...]
     trigger: re.Pattern[str]
     leaders: re.Pattern[str]
-    curated: Mapping[str, tuple[Form, ...]]
-    generated: Mapping[str, tuple[Form, ...]]
+    curated: Mapping[object, tuple[Form, ...]]
+    generated: Mapping[object, tuple[Form, ...]]
     lexicons: Mapping[str, Lexicon]
     connectives: Connectives
     forms: tuple[Form, ...]
-    _cache: dict[str, tuple[Bucket, ...]]
+    _cache: dict[object, tuple[Bucket, ...]]
+    unspaced: bool = False  # some language is written without spaces: try per-character buckets
     lookback: int = 48  # characters before a trigger in which leading words are tried
 
-    def buckets(self, key: str) -> tuple[Bucket, ...]:
+    def buckets(self, key: object) -> tuple[Bucket, ...]:
         found = self._cache.get(key)
         if found is None:
             found = self._build(key)
             self._cache[key] = found
         return found
 
-    def _build(self, ch: str) -> tuple[Bucket, ...]:
-        curated = list(self.curated.get(ch, ()))
-        generated = list(self.generated.get(ch, ()))
-        out: list[Bucket] = []
-        if curated:
+    def _build(self, key: object) -> tuple[Bucket, ...]:
+        curated = list(self.curated.get(key, ()))
+        generated = list(self.generated.get(key, ()))
+        if curated and generated:
             first = _bucket(curated)
-            out.append(first)
             generated = [f for f in generated if not _covered(f, first)]
-        if generated:
-            out.append(_bucket(generated))
-        return tuple(out)
+            if not generated:
+                return (first,)
+        forms = curated + generated
+        return (_bucket(forms),) if forms else ()
 
 
 def _covered(form: Form, curated: Bucket) -> bool:
@@ -196,7 +199,9 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
     freeze = lambda table: MappingProxyType(  # noqa: E731
         {k: MappingProxyType({lg: frozenset(v) for lg, v in d.items()}) for k, d in table.items()}
     )
-    return Connectives(before, join, suffix, day_end, day_start, freeze(relations), freeze(joins))
+    last_words = frozenset(w.split()[-1] for w in before_words if w.split())
+    return Connectives(before, join, suffix, day_end, day_start, freeze(relations), freeze(joins),
+                       last_words)
 
 
 @functools.lru_cache(maxsize=64)
@@ -228,14 +233,17 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
                 for source in sources:
                     forms.append(compile_form(source, root_lex, reading, order, where="locales/root.toml"))
                     order += 1
-    curated: dict[str, list[Form]] = defaultdict(list)
-    generated: dict[str, list[Form]] = defaultdict(list)
+    curated: dict[object, list[Form]] = defaultdict(list)
+    generated: dict[object, list[Form]] = defaultdict(list)
     leaders: set[str] = set()
     for form in forms:
         target = generated if form.fixed else curated
         if form.spaced:
-            for key in form.first_keys:
-                target[key].append(form)
+            pairs = form.pair_keys
+            if pairs is None:  # too many combinations to list: bucket by the first run only
+                pairs = frozenset((k, "") for k in form.first_keys)
+            for pair in pairs:
+                target[pair].append(form)
         else:
             for ch in form.first_chars:
                 target["c:" + ch].append(form)
@@ -243,10 +251,14 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
     # Words of CLDR phrases without slots ("now") trigger too.
     extra = {max(f.source.split(), key=len) for f in forms if f.fixed == () and f.reading == "NOW"}
     spaced = sorted({t for lex in lexicons.values() if lex.spaces for t in lex.triggers} | extra)
+    quiet = {w for lang in languages for w in load_locale(lang).quiet}
+    spaced = [t for t in spaced if t not in quiet]
     unspaced = sorted({t for lex in lexicons.values() if not lex.spaces for t in lex.triggers})
     # A digit that does not continue a number ("2025.1" triggers once); written with the
     # look-behind after the digit so that the regex engine can skip ahead by character class.
-    parts = [r"\d(?<![\d.,:/]\d)"]
+    # Digits after a letter and a hyphen are a ticket key ("WRN-2025"), common practice in
+    # trackers, and never start a date.
+    parts = [r"\d(?<![\d.,:/#]\d)(?<![^\W\d_]-\d)"]
     if spaced:
         parts.append(rf"(?<!\w){trie_regex(spaced)}(?!\w)")
     if unspaced:
@@ -265,4 +277,5 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
         connectives=_connectives(languages),
         forms=tuple(forms),
         _cache={},
+        unspaced=any(not lex.spaces for lex in lexicons.values()),
     )
