@@ -3,7 +3,8 @@
 Periods of a day or longer are spans of local dates ``[first, end)`` (end exclusive); they turn
 into instants at the first moment of each local day, which is midnight except where a zone skips
 it (America/Santiago 2024-09-08 starts at 01:00) or skips a whole day (Pacific/Apia 2011-12-30).
-Hours and minutes are elapsed time.
+Moving by hours and minutes is elapsed time; the hour or minute containing a moment is the
+wall-clock unit, cut where the zone changes its offset (see ``_unit_containing``).
 """
 
 from __future__ import annotations
@@ -176,21 +177,85 @@ def period_containing(
     tz = moment.tzinfo
     assert isinstance(tz, ZoneInfo), "moments carry a ZoneInfo"
     if grain in _ELAPSED:
-        size = _ELAPSED[grain]
-        local = moment.replace(tzinfo=None)
-        if grain is Grain.SECOND:
-            floor = local.replace(microsecond=0)
-        elif grain is Grain.MINUTE:
-            floor = local.replace(second=0, microsecond=0)
-        else:
-            floor = local.replace(minute=0, second=0, microsecond=0)
-        start = floor.replace(tzinfo=tz, fold=moment.fold)
-        if start.astimezone(UTC) > moment.astimezone(UTC):  # wall clock repeated after a fold
-            start = floor.replace(tzinfo=tz, fold=0)
-        end = (start.astimezone(UTC) + timedelta(seconds=size)).astimezone(tz)
-        return start.astimezone(tz), end
+        return _unit_containing(moment, grain, tz)
     first, end = day_span(moment.date(), grain, week_start)
     return start_of_day(first, tz), start_of_day(end, tz)
+
+
+def _floor(wall: datetime, grain: Grain) -> datetime:
+    if grain is Grain.SECOND:
+        return wall.replace(microsecond=0)
+    if grain is Grain.MINUTE:
+        return wall.replace(second=0, microsecond=0)
+    return wall.replace(minute=0, second=0, microsecond=0)
+
+
+def _readings(naive: datetime, tz: ZoneInfo) -> list[datetime]:
+    """The UTC instants whose wall clock in ``tz`` reads ``naive`` (two where the clock was set
+    back), or the first instant after the gap when it does not exist."""
+    found = {a.astimezone(UTC) for fold in (0, 1) if (a := _exists(naive.replace(fold=fold), tz))}
+    return sorted(found) or [local_instant(naive, tz).astimezone(UTC)]
+
+
+def _offset_change(lo: datetime, hi: datetime, tz: ZoneInfo) -> datetime:
+    """The first instant in ``(lo, hi]`` (UTC) whose UTC offset differs from ``lo``'s, to the
+    second (tzdata changes offsets on whole seconds)."""
+    offset = lo.astimezone(tz).utcoffset()
+    while hi - lo > timedelta(seconds=1):
+        mid = lo + (hi - lo) / 2
+        if mid.astimezone(tz).utcoffset() == offset:
+            lo = mid
+        else:
+            hi = mid
+    return hi.replace(microsecond=0)
+
+
+def _starts_unit(change: datetime, before: timedelta, tz: ZoneInfo, grain: Grain) -> bool:
+    """Whether the offset change at ``change`` (from offset ``before``) begins a new unit: the
+    clock was set back (the repeated time is a unit of its own), or it jumped to a whole unit
+    or into another unit."""
+    after = change.astimezone(tz)
+    if after.utcoffset() < before:
+        return True
+    wall = after.replace(tzinfo=None)
+    just_before = (change + before).replace(tzinfo=None) - timedelta(microseconds=1)
+    return _floor(wall, grain) == wall or _floor(wall, grain) != _floor(just_before, grain)
+
+
+def _unit_containing(moment: datetime, grain: Grain, tz: ZoneInfo) -> tuple[datetime, datetime]:
+    """The wall-clock second, minute or hour containing ``moment``.
+
+    A unit starts where the wall clock shows a whole unit, or where a change of offset begins a
+    new one (see :func:`_starts_unit`); it ends where the next one starts. With whole-hour
+    changes every unit lasts exactly one unit of elapsed time; a change by another amount
+    (Australia/Lord_Howe moves by 30 minutes, old local mean times by odd seconds) makes one
+    shorter, never longer.
+    """
+    size = timedelta(seconds=_ELAPSED[grain])
+    at = moment.astimezone(UTC)
+    floor = _floor(moment.replace(tzinfo=None), grain)
+    start = max((t for t in _readings(floor, tz) if t <= at), default=at)
+    offset = start.astimezone(tz).utcoffset()
+    assert offset is not None
+    if at.astimezone(tz).utcoffset() != offset:
+        change = _offset_change(start, at, tz)
+        if _starts_unit(change, offset, tz, grain):
+            start = change
+    t = start
+    while True:  # the end: the next whole unit, or a change of offset that begins a unit
+        offset = t.astimezone(tz).utcoffset()
+        assert offset is not None
+        wall = t.astimezone(tz).replace(tzinfo=None)
+        nxt = t + (_floor(wall, grain) + size - wall)
+        if nxt.astimezone(tz).utcoffset() == offset:
+            end = nxt
+            break
+        change = _offset_change(t, nxt, tz)
+        if _starts_unit(change, offset, tz, grain):
+            end = change
+            break
+        t = change
+    return start.astimezone(tz), end.astimezone(tz)
 
 
 def period_value(first: date, grain: Grain, week_start: int = 0) -> str:
