@@ -258,6 +258,34 @@ def _unit_containing(moment: datetime, grain: Grain, tz: ZoneInfo) -> tuple[date
     return start.astimezone(tz), end.astimezone(tz)
 
 
+def unit_shifted(moment: datetime, grain: Grain, n: int) -> tuple[datetime, datetime]:
+    """The wall-clock second, minute or hour ``n`` units after (``n < 0``: before) the one
+    containing ``moment``, counted unit by unit, so that next to an offset change a short unit
+    counts as one.
+
+    >>> s, e = unit_shifted(datetime(2026, 3, 29, 3, 15, tzinfo=ZoneInfo("Europe/Berlin")), Grain.HOUR, -1)
+    >>> s.isoformat(), e.isoformat()
+    ('2026-03-29T01:00:00+01:00', '2026-03-29T03:00:00+02:00')
+    """
+    tz = moment.tzinfo
+    assert isinstance(tz, ZoneInfo), "moments carry a ZoneInfo"
+    size = timedelta(seconds=_ELAPSED[grain])
+    start, end = _unit_containing(moment, grain, tz)
+    start, end = start.astimezone(UTC), end.astimezone(UTC)
+    for _ in range(abs(n)):
+        # Fast path: a whole unit at a steady offset is exactly one unit of elapsed time.
+        edge = end if n > 0 else start - size
+        wall = edge.astimezone(tz)
+        naive = wall.replace(tzinfo=None)
+        if naive == _floor(naive, grain) and wall.utcoffset() == (edge + size).astimezone(tz).utcoffset():
+            start, end = edge, edge + size
+            continue
+        probe = end if n > 0 else start - timedelta(microseconds=1)
+        found = _unit_containing(probe.astimezone(tz), grain, tz)
+        start, end = found[0].astimezone(UTC), found[1].astimezone(UTC)
+    return start.astimezone(tz), end.astimezone(tz)
+
+
 def period_value(first: date, grain: Grain, week_start: int = 0) -> str:
     """The ISO 8601 name of the period starting on ``first``: ``2026-12-01``, ``2026-W48``,
     ``2026-11``, ``2026-Q4``, ``2026-H2``, ``2026``; a week that does not start on Monday is

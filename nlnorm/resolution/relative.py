@@ -2,11 +2,12 @@
 
 from __future__ import annotations
 
-from datetime import date, datetime, time, timedelta
+from datetime import date, datetime, time, timedelta, timezone
 from typing import TYPE_CHECKING
 
 from .. import cldr
-from ..calendars import add_units, day_span, local_instant, period_containing, shift_period
+from ..calendars import add_units, day_span, local_instant, shift_period
+from ..calendars.periods import unit_shifted
 from ..model import (
     DayPeriodRef,
     Duration,
@@ -36,10 +37,11 @@ _DURATION = {
 def _period(moment: datetime, grain: Grain, ctx: "Context", shift: int = 0) -> Interval:
     """The whole ``grain`` period containing ``moment``, shifted by ``shift`` periods."""
     if grain in _SUBDAY:
-        start, _ = period_containing(moment, grain)
-        start = add_units(start, grain, shift)
-        end = add_units(start, grain, 1)
-        value = f"{iso(start)}/{_DURATION[grain].format(1)}"
+        # Wall-clock units, counted one by one: next to an offset change one can be shorter.
+        start, end = unit_shifted(moment, grain, shift)
+        whole = end.astimezone(timezone.utc) - start.astimezone(timezone.utc) == timedelta(
+            seconds={Grain.SECOND: 1, Grain.MINUTE: 60, Grain.HOUR: 3600}[grain])
+        value = f"{iso(start)}/{_DURATION[grain].format(1)}" if whole else f"{iso(start)}/{iso(end)}"
         return Interval(start, end, grain, value)
     first, _ = day_span(moment.date(), grain, ctx.first_weekday)
     first = shift_period(first, grain, shift)
@@ -61,9 +63,15 @@ def shift_period_(m: ShiftPeriod, ctx: "Context") -> Outcome:
 
 
 def offset(m: Offset, ctx: "Context") -> Outcome:
-    moment = add_units(ctx.now, m.grain, m.n)
     rid = "R3" if m.n < 0 else "R4"
-    interval = _period(moment, m.grain, ctx)
+    if m.grain in _SUBDAY:
+        interval = _period(add_units(ctx.now, m.grain, m.n), m.grain, ctx)
+    else:
+        # Calendar units move the local date, as "yesterday" does: a day the zone skipped is
+        # still counted (and is empty), not replaced by the day after it.
+        day = shift_period(ctx.now.date(), m.grain, m.n)
+        first, end = day_span(day, m.grain, ctx.first_weekday)
+        interval = dates(first, end, m.grain, ctx)
     when = f"{abs(m.n)} {m.grain.value}(s) {'before' if m.n < 0 else 'after'} now"
     return reading(interval, rid, f"the whole {m.grain.value} containing the moment {when}"), ()
 
