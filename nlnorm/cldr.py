@@ -1,9 +1,14 @@
-"""The only module that reads Unicode CLDR data, through babel.
+"""The only module that reads Unicode CLDR data.
 
 Month and weekday names, relative date fields ("last week", "in {0} days"), day periods, week
-data and date-format order all come from here, never from hand-typed lists. babel keeps the
-relative date fields and day-period rules in ``Locale._data`` without a public accessor; reading
-them is confined to this module so a babel change touches one place.
+data and date-format order all come from CLDR through babel, never from hand-typed lists.
+
+Loading babel's locale data costs about 35 ms, most of a command-line start, so what nlnorm
+uses of it is also kept as generated JSON in ``locales/_cldr/`` (``python -m nlnorm.cldr``
+writes it; ``tests/locales/test_cldr_cache.py`` checks it equals what babel gives now). A
+language or locale missing there is read from babel directly. babel keeps the relative date
+fields and day-period rules in ``Locale._data`` without a public accessor; reading them is
+confined to this module, so a babel change touches one place.
 
 Checked against: CLDR 49 as shipped in babel 2.19 (``babel.core.get_cldr_version``).
 """
@@ -11,7 +16,9 @@ Checked against: CLDR 49 as shipped in babel 2.19 (``babel.core.get_cldr_version
 from __future__ import annotations
 
 import functools
+import json
 from dataclasses import dataclass
+from pathlib import Path
 from typing import Any
 
 __all__ = [
@@ -29,6 +36,9 @@ __all__ = [
     "date_order",
     "RelativeField",
     "RelativePattern",
+    "extract_language",
+    "extract_locales",
+    "write_cache",
 ]
 
 #: CLDR date-field keys that name a grain nlnorm resolves, mapped to the grain name.
@@ -67,15 +77,192 @@ class RelativePattern:
     width: str
 
 
-def _babel() -> Any:
+# --- the generated cache ----------------------------------------------------------------------
+
+
+def _cache_dir() -> Path:
+    from .locale import locales_dir
+
+    return locales_dir() / "_cldr"
+
+
+@functools.cache
+def _cached_language(lang: str) -> dict[str, Any] | None:
+    path = _cache_dir() / f"{lang}.json"
+    if not path.is_file():
+        return None
+    return json.loads(path.read_text(encoding="utf-8"))
+
+
+@functools.cache
+def _cached_locales() -> dict[str, Any] | None:
+    path = _cache_dir() / "_locales.json"
+    if not path.is_file():
+        return None
+    return json.loads(path.read_text(encoding="utf-8"))
+
+
+def _language(lang: str) -> dict[str, Any]:
+    return _cached_language(lang) or _extract_language_cached(lang)
+
+
+@functools.lru_cache(maxsize=256)
+def _extract_language_cached(lang: str) -> dict[str, Any]:
+    return extract_language(lang)
+
+
+def _locale_row(locale: str) -> list[Any]:
+    table = _cached_locales()
+    if table is not None and locale in table["locales"]:
+        return table["locales"][locale]
+    return _extract_locale_row(locale)
+
+
+# --- babel readers (used to build the cache and for anything not in it) -----------------------
+
+
+@functools.lru_cache(maxsize=256)
+def _locale(code: str) -> Any:
+    from babel import Locale
+
+    return Locale.parse(code)
+
+
+def _plain(value: Any) -> Any:
+    if hasattr(value, "items"):
+        return {k: _plain(v) for k, v in value.items()}
+    return value
+
+
+def _name_table(data: dict[str, Any]) -> dict[str, list[list[Any]]]:
+    out: dict[str, dict[str, int]] = {"wide": {}, "abbreviated": {}, "short": {}}
+    for context in ("format", "stand-alone"):
+        for width in ("wide", "abbreviated", "short"):
+            for key, name in (data.get(context, {}).get(width) or {}).items():
+                word = str(name).lower()
+                out[width].setdefault(word, int(key))
+                if word.endswith("."):
+                    out[width].setdefault(word[:-1], int(key))
+    return {w: [[k, v] for k, v in sorted(d.items())] for w, d in out.items()}
+
+
+def extract_language(lang: str) -> dict[str, Any]:
+    """Everything nlnorm uses of one language's CLDR data, read from babel, as plain JSON."""
+    from babel.core import get_cldr_version
+
     import babel
 
-    return babel
+    loc = _locale(lang)
+    fields = _plain(loc._data.get("date_fields", {}))
+    rel: list[list[Any]] = []
+    pat: list[list[Any]] = []
+    for key, entry in fields.items():
+        base, _, width = key.partition("-")
+        if base not in FIELD_GRAINS and base not in WEEKDAY_FIELDS:
+            continue
+        name = FIELD_GRAINS.get(base, base)
+        for offset, text in (entry.get("relative") or {}).items():
+            rel.append([str(text), name, int(offset), width])
+        for direction, sign in (("past", -1), ("future", 1)):
+            for plural, pattern in (entry.get(direction) or {}).items():
+                pat.append([str(pattern), name, sign, str(plural), width])
+    periods = _plain(loc.day_periods)
+    words: dict[str, str] = {}
+    for context in ("stand-alone", "format"):
+        for width in ("wide", "abbreviated", "narrow"):
+            for pid, name in (periods.get(context, {}).get(width) or {}).items():
+                if pid in ("am", "pm", "noon", "midnight"):
+                    continue
+                word = str(name).lower()
+                words.setdefault(word, pid)
+                if word.endswith("."):
+                    words.setdefault(word[:-1], pid)
+    rules = _plain(loc.day_period_rules or {})
+    base_rules = rules.get(None) or rules.get("") or {}
+    spans: dict[str, list[int]] = {}
+    for pid, found in base_rules.items():
+        for span in found:
+            if "from" in span and "before" in span:
+                spans[pid] = [int(span["from"]), int(span["before"])]
+    return {
+        "babel": babel.__version__,
+        "cldr": str(get_cldr_version()),
+        "language": lang,
+        "months": _name_table(_plain(loc.months)),
+        "weekdays": _name_table(_plain(loc.days)),
+        "relative_fields": rel,
+        "relative_patterns": pat,
+        "day_period_words": sorted([w, p] for w, p in words.items()),
+        "day_period_rules": spans,
+    }
+
+
+def _extract_locale_row(locale: str) -> list[Any]:
+    from babel.dates import get_date_format
+
+    loc = _locale(locale)
+    pattern = get_date_format("short", locale=loc).pattern
+    order: list[str] = []
+    in_quote = False
+    for ch in pattern:
+        if ch == "'":
+            in_quote = not in_quote
+            continue
+        if in_quote:
+            continue
+        key = {"y": "Y", "M": "M", "L": "M", "d": "D"}.get(ch)
+        if key and key not in order:
+            order.append(key)
+    text = "".join(order)
+    return [int(loc.first_week_day), int(loc.weekend_start), int(loc.weekend_end),
+            text if text in ("MDY", "DMY", "YMD") else "YMD"]
+
+
+def extract_locales() -> dict[str, Any]:
+    """Week data and numeric date order of every locale babel ships, as plain JSON."""
+    from babel.core import get_cldr_version
+    from babel.localedata import locale_identifiers
+
+    import babel
+
+    rows = {}
+    for code in sorted(locale_identifiers()):
+        try:
+            rows[code] = _extract_locale_row(code)
+        except Exception:  # a locale babel lists but cannot load: leave it to babel at run time
+            continue
+    return {"babel": babel.__version__, "cldr": str(get_cldr_version()), "locales": rows}
+
+
+def write_cache(languages: list[str] | None = None) -> list[Path]:
+    """Write ``locales/_cldr/<lang>.json`` for each language with a locale file, and
+    ``_locales.json``. Returns the paths written."""
+    from .locale import available_languages
+
+    folder = _cache_dir()
+    folder.mkdir(exist_ok=True)
+    written = []
+    for lang in sorted(languages or available_languages()):
+        path = folder / f"{lang}.json"
+        path.write_text(json.dumps(extract_language(lang), ensure_ascii=False, indent=0) + "\n",
+                        encoding="utf-8")
+        written.append(path)
+    path = folder / "_locales.json"
+    path.write_text(json.dumps(extract_locales(), ensure_ascii=False, indent=0) + "\n",
+                    encoding="utf-8")
+    written.append(path)
+    return written
+
+
+# --- the public readers -------------------------------------------------------------------------
 
 
 @functools.cache
 def cldr_version() -> str:
-    """The CLDR version babel ships, e.g. ``'49'``."""
+    """The CLDR version of the data in use, e.g. ``'49'``."""
+    table = _cached_locales()
+    if table is not None:
+        return str(table["cldr"])
     from babel.core import get_cldr_version
 
     return str(get_cldr_version())
@@ -84,16 +271,12 @@ def cldr_version() -> str:
 @functools.cache
 def all_locale_ids() -> tuple[str, ...]:
     """Every locale id babel ships data for."""
+    table = _cached_locales()
+    if table is not None:
+        return tuple(sorted(table["locales"]))
     from babel.localedata import locale_identifiers
 
     return tuple(sorted(locale_identifiers()))
-
-
-@functools.lru_cache(maxsize=256)
-def _locale(code: str) -> Any:
-    from babel import Locale
-
-    return Locale.parse(code)
 
 
 @functools.lru_cache(maxsize=256)
@@ -115,6 +298,9 @@ def locale_id(value: str) -> str:
         elif len(parts[i]) == 4:
             parts[i] = parts[i].title()
     norm = "_".join(parts)
+    table = _cached_locales()
+    if table is not None and norm in table["locales"]:
+        return norm
     try:
         loc = _locale(norm)
     except Exception:
@@ -133,7 +319,7 @@ def first_week_day(locale: str) -> int:
     >>> first_week_day("en_US"), first_week_day("de_DE"), first_week_day("pt_PT")
     (6, 0, 6)
     """
-    day = int(_locale(locale).first_week_day)
+    day = int(_locale_row(locale)[0])
     return day if day in (0, 5, 6) else 0
 
 
@@ -144,75 +330,52 @@ def weekend_days(locale: str) -> tuple[int, ...]:
     >>> weekend_days("en_US"), weekend_days("fa_IR")
     ((5, 6), (4,))
     """
-    loc = _locale(locale)
-    start, end = int(loc.weekend_start), int(loc.weekend_end)
+    row = _locale_row(locale)
+    start, end = int(row[1]), int(row[2])
     days = [start]
     while days[-1] != end:
         days.append((days[-1] + 1) % 7)
     return tuple(days)
 
 
-def _plain(value: Any) -> Any:
-    if hasattr(value, "items"):
-        return {k: _plain(v) for k, v in value.items()}
-    return value
+@functools.lru_cache(maxsize=256)
+def date_order(locale: str) -> str:
+    """The order of year, month and day in the locale's CLDR short date format.
+
+    >>> date_order("en_US"), date_order("en_GB"), date_order("ja")
+    ('MDY', 'DMY', 'YMD')
+    """
+    return str(_locale_row(locale)[3])
+
+
+def _names(table: dict[str, list[list[Any]]]) -> dict[str, tuple[tuple[str, int], ...]]:
+    return {w: tuple((str(k), int(v)) for k, v in rows) for w, rows in table.items()}
 
 
 @functools.lru_cache(maxsize=512)
 def month_words(lang: str) -> dict[str, tuple[tuple[str, int], ...]]:
     """Month names by width: ``{"wide": (("january", 1), ...), "abbreviated": ...}``, lower-case,
     format and stand-alone contexts merged, abbreviations with and without their dot."""
-    months = _plain(_locale(lang).months)
-    return _name_table(months)
+    return _names(_language(lang)["months"])
 
 
 @functools.lru_cache(maxsize=512)
 def weekday_words(lang: str) -> dict[str, tuple[tuple[str, int], ...]]:
     """Weekday names by width, 0 = Monday, lower-case, both contexts merged."""
-    return _name_table(_plain(_locale(lang).days))
-
-
-def _name_table(data: dict[str, Any]) -> dict[str, tuple[tuple[str, int], ...]]:
-    out: dict[str, dict[str, int]] = {"wide": {}, "abbreviated": {}, "short": {}}
-    for context in ("format", "stand-alone"):
-        for width in ("wide", "abbreviated", "short"):
-            for key, name in (data.get(context, {}).get(width) or {}).items():
-                word = str(name).lower()
-                out[width].setdefault(word, int(key))
-                if word.endswith("."):
-                    out[width].setdefault(word[:-1], int(key))
-    return {w: tuple(sorted(d.items())) for w, d in out.items()}
+    return _names(_language(lang)["weekdays"])
 
 
 @functools.lru_cache(maxsize=1024)
 def relative_fields(lang: str) -> tuple[RelativeField, ...]:
     """Every CLDR ``relative-type`` phrase of ``lang`` ("yesterday", "last week", "next qtr.")."""
-    fields = _plain(_locale(lang)._data.get("date_fields", {}))
-    out: list[RelativeField] = []
-    for key, entry in fields.items():
-        base, _, width = key.partition("-")
-        if base not in FIELD_GRAINS and base not in WEEKDAY_FIELDS:
-            continue
-        for offset, text in (entry.get("relative") or {}).items():
-            out.append(RelativeField(str(text), FIELD_GRAINS.get(base, base), int(offset), width))
-    return tuple(out)
+    return tuple(RelativeField(t, f, int(o), w) for t, f, o, w in _language(lang)["relative_fields"])
 
 
 @functools.lru_cache(maxsize=1024)
 def relative_patterns(lang: str) -> tuple[RelativePattern, ...]:
     """Every CLDR past/future pattern of ``lang`` ("{0} days ago", "in {0} weeks"), per plural."""
-    fields = _plain(_locale(lang)._data.get("date_fields", {}))
-    out: list[RelativePattern] = []
-    for key, entry in fields.items():
-        base, _, width = key.partition("-")
-        if base not in FIELD_GRAINS and base not in WEEKDAY_FIELDS:
-            continue
-        for direction, sign in (("past", -1), ("future", 1)):
-            for plural, pattern in (entry.get(direction) or {}).items():
-                out.append(
-                    RelativePattern(str(pattern), FIELD_GRAINS.get(base, base), sign, plural, width)
-                )
-    return tuple(out)
+    return tuple(RelativePattern(p, f, int(s), pl, w)
+                 for p, f, s, pl, w in _language(lang)["relative_patterns"])
 
 
 @functools.lru_cache(maxsize=512)
@@ -220,18 +383,7 @@ def day_period_words(lang: str) -> tuple[tuple[str, str], ...]:
     """CLDR day-period names of ``lang`` (every width, both contexts) with their period ids,
     e.g. ``("morning", "morning1")``; am/pm/noon/midnight are left out (not periods of a day
     a question asks about)."""
-    periods = _plain(_locale(lang).day_periods)
-    out: dict[str, str] = {}
-    for context in ("stand-alone", "format"):
-        for width in ("wide", "abbreviated", "narrow"):
-            for pid, name in (periods.get(context, {}).get(width) or {}).items():
-                if pid in ("am", "pm", "noon", "midnight"):
-                    continue
-                word = str(name).lower()
-                out.setdefault(word, pid)
-                if word.endswith("."):
-                    out.setdefault(word[:-1], pid)
-    return tuple(sorted(out.items()))
+    return tuple((str(w), str(p)) for w, p in _language(lang)["day_period_words"])
 
 
 @functools.lru_cache(maxsize=512)
@@ -243,36 +395,9 @@ def day_period_rules(lang: str) -> dict[str, tuple[int, int]]:
     >>> day_period_rules("en")["afternoon1"]
     (43200, 64800)
     """
-    rules = _plain(_locale(lang).day_period_rules or {})
-    base = rules.get(None) or rules.get("") or {}
-    out: dict[str, tuple[int, int]] = {}
-    for pid, spans in base.items():
-        for span in spans:
-            if "from" in span and "before" in span:
-                out[pid] = (int(span["from"]), int(span["before"]))
-    return out
+    return {k: (int(v[0]), int(v[1])) for k, v in _language(lang)["day_period_rules"].items()}
 
 
-@functools.lru_cache(maxsize=256)
-def date_order(locale: str) -> str:
-    """The order of year, month and day in the locale's CLDR short date format.
-
-    >>> date_order("en_US"), date_order("en_GB"), date_order("ja")
-    ('MDY', 'DMY', 'YMD')
-    """
-    from babel.dates import get_date_format
-
-    pattern = get_date_format("short", locale=_locale(locale)).pattern
-    order = []
-    in_quote = False
-    for ch in pattern:
-        if ch == "'":
-            in_quote = not in_quote
-            continue
-        if in_quote:
-            continue
-        key = {"y": "Y", "M": "M", "L": "M", "d": "D"}.get(ch)
-        if key and key not in order:
-            order.append(key)
-    text = "".join(order)
-    return text if text in ("MDY", "DMY", "YMD") else "YMD"
+if __name__ == "__main__":
+    for written in write_cache():
+        print(f"wrote {written}")

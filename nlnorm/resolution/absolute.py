@@ -58,19 +58,24 @@ def date_ref_interval(ref: DateRef, year: int, ctx: "Context") -> Interval | Non
 _REACH = 8
 
 
-def _biased(ref: DateRef, ctx: "Context", bias: str) -> Interval | None:
-    """Past bias: the latest such period whose start <= now; future bias: the earliest whose
-    end > now. The current period counts for both."""
+def _both_biases(ref: DateRef, ctx: "Context") -> tuple[Interval | None, Interval | None]:
+    """(past, future). Past bias: the latest such period whose start <= now; future bias: the
+    earliest whose end > now. The current period counts for both. Years are tried outward
+    from now, as far as the rarest fields need: ISO week 53 recurs up to 7 years apart,
+    February 29 up to 8 (2096 -> 2104)."""
     now = ctx.now
-    # Wide enough for the rarest fields: ISO week 53 recurs up to 7 years apart, February 29
-    # up to 8 (2096 -> 2104).
-    years = range(now.year - _REACH, now.year + _REACH + 1)
-    found = [iv for y in years if (iv := date_ref_interval(ref, y, ctx)) is not None]
-    if bias == "past":
-        past = [iv for iv in found if iv.start is not None and iv.start <= now]
-        return past[-1] if past else None
-    future = [iv for iv in found if iv.end is not None and iv.end > now]
-    return future[0] if future else None
+    past = future = None
+    for y in range(now.year, now.year - _REACH - 1, -1):
+        iv = date_ref_interval(ref, y, ctx)
+        if iv is not None and iv.start is not None and iv.start <= now:
+            past = iv
+            break
+    for y in range(now.year - 1, now.year + _REACH + 1):
+        iv = date_ref_interval(ref, y, ctx)
+        if iv is not None and iv.end is not None and iv.end > now:
+            future = iv
+            break
+    return past, future
 
 
 def _what(ref: DateRef) -> str:
@@ -113,8 +118,7 @@ def date_ref(ref: DateRef, ctx: "Context", rid: str, lang: str = "en") -> Outcom
                 alts = (reading(other, "R18", f"numeric date read {_ORDER_NAMES[swapped]}",
                                 f"date_order={swapped}"),)
         return reading(interval, rid, note), alts
-    past = _biased(ref, ctx, "past")
-    future = _biased(ref, ctx, "future")
+    past, future = _both_biases(ref, ctx)
     chosen, other, other_policy = (past, future, "bias=future") if ctx.bias == "past" else (future, past, "bias=past")
     if chosen is None:
         if other is None:

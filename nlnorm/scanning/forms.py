@@ -120,30 +120,46 @@ def runs_key(text: str, pos: int = 0) -> tuple[str, str]:
     return first, second
 
 
+@functools.lru_cache(maxsize=65536)
+def _runs2(sample: str) -> tuple[str, ...]:
+    runs = _RUN.findall(sample)[:2]
+    return tuple(f"#{min(len(r), 4)}" if r[0].isdigit() else r for r in runs)
+
+
 def _sample_keys(token_samples: list[tuple[list[str], bool]]) -> set[tuple[str, str]] | None:
-    """Every (first run, second run) a form can start with, from sample texts of its tokens;
-    ``None`` when there are too many combinations to list."""
-    keys: set[tuple[str, str]] = set()
-    budget = [_MAX_SAMPLES]
+    """Every (first run, second run) a form can start with, from sample texts of its tokens
+    (tokens are separated by white space, so runs never cross a token boundary); a second run
+    of ``""`` means the form may end after one run."""
+    tokens = [({r for s in samples if (r := _runs2(s))}, optional)
+              for samples, optional in token_samples]
 
-    def walk(index: int, prefix: str) -> bool:
-        if budget[0] <= 0:
-            return False
-        runs = _RUN.findall(prefix)
-        if len(runs) >= 2 or index == len(token_samples):
-            budget[0] -= 1
-            k = runs_key(prefix)
-            keys.add(k if index < len(token_samples) or k[1] else (k[0], ""))
-            return True
-        samples, optional = token_samples[index]
-        if optional and not walk(index + 1, prefix):
-            return False
-        for sample in samples:
-            if not walk(index + 1, f"{prefix} {sample}" if prefix else sample):
-                return False
-        return True
+    @functools.cache
+    def firsts(i: int) -> frozenset[str]:
+        if i == len(tokens):
+            return frozenset({""})
+        runs, optional = tokens[i]
+        out = {r[0] for r in runs}
+        if optional:
+            out |= firsts(i + 1)
+        return frozenset(out)
 
-    return keys if walk(0, "") else None
+    @functools.cache
+    def pairs(i: int) -> frozenset[tuple[str, str]]:
+        if i == len(tokens):
+            return frozenset()
+        runs, optional = tokens[i]
+        out: set[tuple[str, str]] = set()
+        for r in runs:
+            if len(r) >= 2:
+                out.add((r[0], r[1]))
+            else:
+                out.update((r[0], f) for f in firsts(i + 1))
+        if optional:
+            out |= pairs(i + 1)
+        return frozenset(out)
+
+    found = set(pairs(0))
+    return found if len(found) <= _MAX_SAMPLES else None
 
 
 def key_of(text: str) -> str:
@@ -164,6 +180,42 @@ def key_of(text: str) -> str:
 
 def _first_words(words: object) -> set[str]:
     return {w.split()[0] for w in words if w.split()}  # type: ignore[union-attr]
+
+
+@dataclass(frozen=True, slots=True)
+class _ClassInfo:
+    samples: tuple[str, ...]
+    firsts: frozenset[str]
+    keys: frozenset[str]
+    leaders: frozenset[str]
+
+
+_CLASS_INFO: dict[tuple[int, str], _ClassInfo] = {}
+
+
+def _class_info(lex: Lexicon, cls: str) -> _ClassInfo:
+    """What a slot class contributes to a form's first characters, keys, leading words and
+    samples (computed once per lexicon and class)."""
+    key = (id(lex.words), cls)
+    found = _CLASS_INFO.get(key)
+    if found is not None:
+        return found
+    table = lex.words.get(cls, {})
+    samples = list(_DIGIT_SAMPLES.get(cls, ()))
+    samples += [w for w in table if w]
+    if cls == "day":
+        samples += [d + sfx for d in ("1", "10") for sfx in lex.ordinal_suffixes]
+    firsts = {w[0] for w in table if w}
+    if cls in REGEX_CLASSES or cls == "num":
+        firsts |= _DIGITS
+    keys = set(_DIGIT_KEYS.get(cls, ())) | {key_of(w) for w in table if w}
+    if cls not in TRIGGER_CLASSES:
+        leaders = _first_words(table)
+    else:
+        leaders = {w.split()[0] for w in table if len(w.split()) > 1}
+    found = _ClassInfo(tuple(samples), frozenset(firsts), frozenset(keys), frozenset(leaders))
+    _CLASS_INFO[key] = found
+    return found
 
 
 def compile_form(
@@ -219,25 +271,16 @@ def compile_form(
                         raise LocaleError(
                             f"{where}: form {source!r} uses unknown slot {{{cls}}} (known: {known})"
                         )
-                    piece_samples = list(_DIGIT_SAMPLES.get(cls, ()))
-                    piece_samples += [w for w in lex.words.get(cls, {}) if w]
-                    if cls == "day":
-                        piece_samples += [d + sfx for d in ("1", "10") for sfx in lex.ordinal_suffixes]
+                    info = _class_info(lex, cls)
+                    piece_samples = info.samples
                     samples = [a + b for a in samples for b in piece_samples][:_MAX_SAMPLES]
                     group = f"f{order}_{len(slots)}"
                     slots.append((group, cls))
                     parts.append(f"(?P<{group}>{lex.regex[cls]})")
                     if first_piece:
-                        if cls in REGEX_CLASSES or cls == "num":
-                            firsts |= _DIGITS
-                        table = lex.words.get(cls, {})
-                        firsts |= {w[0] for w in table if w}
-                        keys |= set(_DIGIT_KEYS.get(cls, ()))
-                        keys |= {key_of(w) for w in table if w}
-                        if cls not in TRIGGER_CLASSES:
-                            leaders |= _first_words(table)
-                        else:
-                            leaders |= {w.split()[0] for w in table if len(w.split()) > 1}
+                        firsts |= info.firsts
+                        keys |= info.keys
+                        leaders |= info.leaders
                 else:
                     lowered = literal.lower()
                     samples = [a + lowered for a in samples]
