@@ -154,6 +154,14 @@ def lexicon(lang: str) -> Lexicon:
     for grain, forms in data.units.items():
         for form in forms:
             put("unit", form, grain)
+    # CLDR's abbreviated units keep their dot ("in {0} hr.", "last qtr."): a unit word may be
+    # written with it, so a curated form reads the whole CLDR phrase.
+    for pattern in cldr.relative_patterns(lang):
+        if pattern.field in cldr.FIELD_GRAINS.values() and pattern.width != "narrow":
+            tokens = pattern.pattern.lower().split()
+            for i, token in enumerate(tokens):
+                if token == "{0}" and i + 1 < len(tokens) and tokens[i + 1].endswith("."):
+                    put("unit", tokens[i + 1], pattern.field)
     offsets = {"last": -1, "this": 0, "next": 1}
     for name, forms in data.direction.items():
         for form in forms:
