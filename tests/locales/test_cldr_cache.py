@@ -1,0 +1,38 @@
+"""The generated CLDR extract in locales/_cldr/ is exactly what babel gives now.
+
+Checked against: Unicode CLDR via babel (``babel.Locale`` data and ``babel.dates`` formats);
+the extract is regenerated with ``python -m nlnorm.cldr``.
+"""
+
+from __future__ import annotations
+
+import json
+
+import babel
+import pytest
+
+from nlnorm import cldr
+from nlnorm.locale import available_languages, locales_dir
+
+FOLDER = locales_dir() / "_cldr"
+
+
+@pytest.mark.parametrize("lang", sorted(available_languages()))
+def test_language_extract_equals_babel(lang):
+    cached = json.loads((FOLDER / f"{lang}.json").read_text(encoding="utf-8"))
+    assert cached == cldr.extract_language(lang), "run: python -m nlnorm.cldr"
+
+
+def test_locale_table_equals_babel_for_a_sample_of_locales():
+    cached = json.loads((FOLDER / "_locales.json").read_text(encoding="utf-8"))
+    assert cached["babel"] == babel.__version__, "run: python -m nlnorm.cldr"
+    for code in ("en", "en_US", "en_GB", "en_IN", "de", "de_AT", "pt_PT", "fa_IR", "ja", "ar_EG"):
+        assert cached["locales"][code] == cldr._extract_locale_row(code), code
+
+
+def test_locale_table_covers_every_babel_locale():
+    from babel.localedata import locale_identifiers
+
+    cached = json.loads((FOLDER / "_locales.json").read_text(encoding="utf-8"))
+    missing = set(locale_identifiers()) - set(cached["locales"])
+    assert len(missing) <= 5, sorted(missing)[:20]
