@@ -147,12 +147,21 @@ def _name_table(data: dict[str, Any]) -> dict[str, list[list[Any]]]:
 
 
 def extract_language(lang: str) -> dict[str, Any]:
-    """Everything nlnorm uses of one language's CLDR data, read from babel, as plain JSON."""
-    from babel.core import get_cldr_version
+    """Everything nlnorm uses of one language's CLDR data, read from babel, as plain JSON.
+
+    A language CLDR does not know (a private-use code such as ``qts``) gets empty tables: its
+    locale file then has to hold every word itself.
+    """
+    from babel.core import UnknownLocaleError, get_cldr_version
 
     import babel
 
-    loc = _locale(lang)
+    try:
+        loc = _locale(lang)
+    except (UnknownLocaleError, ValueError):
+        return {"babel": babel.__version__, "cldr": str(get_cldr_version()), "language": lang,
+                "months": _name_table({}), "weekdays": _name_table({}), "relative_fields": [], "relative_patterns": [],
+                "day_period_words": [], "day_period_rules": {}}
     fields = _plain(loc._data.get("date_fields", {}))
     rel: list[list[Any]] = []
     pat: list[list[Any]] = []
