@@ -136,6 +136,13 @@ def lexicon(lang: str) -> Lexicon:
     for word, day in days["abbreviated"]:
         if collapse(word) not in words.get("weekday", {}):
             put("weekday_abbr", word, day)
+    # CLDR's short weekday fields write the abbreviation with a dot ("last Sun."), which the
+    # weekday names of the same locale may not have: the dotted word is an abbreviation too.
+    for field in cldr.relative_fields(lang):
+        if field.field in cldr.WEEKDAY_FIELDS and field.width == "short":
+            last = field.text.lower().split()[-1] if field.text.split() else ""
+            if last.endswith(".") and collapse(last) not in words.get("weekday", {}):
+                put("weekday_abbr", last, cldr.WEEKDAY_FIELDS.index(field.field))
     for field in cldr.relative_fields(lang):
         if field.field == "day":
             put("relday", field.text, field.offset)
