@@ -46,7 +46,9 @@ class Mention(_Out):
     end: str | None = Field(description="exclusive end, ISO 8601 with UTC offset; null if unbounded")
     grain: str = Field(description="minute | hour | day | week | month | quarter | half | year | sprint")
     value: str = Field(description="ISO 8601 form: 2026-12-01, 2026-W48, 2026-11, 2026-Q4, 2026-H2, "
-                       "2026, P3D, or an interval start/end ('..' = open)")
+                       "2026, P3D, or an interval: calendar dates with the end date included "
+                       "(2026-03-01/2026-04-15, ../2026-02-28) or date-times with offset; "
+                       "'..' is an open end (ISO 8601-2); start and end are always exact")
     lang: str = Field(description="language that matched the phrase ('und' for ISO notation)")
     reading: str = Field(description="the default-reading id it used (R1-R23; see docs/readings.md)")
     note: str = Field(description="how the phrase was read, in plain words")

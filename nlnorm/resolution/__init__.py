@@ -34,7 +34,7 @@ from ..model import (
 )
 from ..parsing import Parsed
 from . import absolute, relative
-from .common import Outcome, iso, open_value, reading
+from .common import Outcome, interval_value, iso, open_value, reading
 
 if TYPE_CHECKING:
     from ..context import Context
@@ -155,7 +155,7 @@ def _between(m: Between, ctx: "Context", lang: str) -> Outcome | None:
             s, e = b.interval.start, a.interval.end
             note += " (bounds were given in reverse order)"
         grain = a.interval.grain
-        return reading(Interval(s, e, grain, f"{iso(s)}/{iso(e)}"), "R11", note, policy)
+        return reading(Interval(s, e, grain, interval_value(s, e)), "R11", note, policy)
 
     chosen = span(chosen_first, chosen_last, None)
     alts = []

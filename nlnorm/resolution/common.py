@@ -11,7 +11,8 @@ from ..model import Grain, Interval, Reading
 if TYPE_CHECKING:
     from ..context import Context
 
-__all__ = ["dates", "instants", "reading", "iso", "open_value", "WEEKDAY_NAMES", "Outcome"]
+__all__ = ["dates", "instants", "reading", "iso", "open_value", "interval_value", "is_day_start",
+           "WEEKDAY_NAMES", "Outcome"]
 
 WEEKDAY_NAMES = ("Monday", "Tuesday", "Wednesday", "Thursday", "Friday", "Saturday", "Sunday")
 
@@ -49,11 +50,29 @@ def instants(start: datetime | None, end: datetime | None, grain: Grain) -> Inte
     return Interval(start, end, grain, f"{iso(start)}/{iso(end)}")
 
 
-def open_value(start: datetime | None, end: datetime | None, day_aligned: bool) -> str:
-    """The value of a half-bounded interval: ``2026-03-01/..`` or ``../2026-03-01T00:00:00+01:00``."""
-    if start is not None and end is None and day_aligned:
-        return f"{start.date().isoformat()}/.."
+def is_day_start(moment: datetime | None) -> bool:
+    """Whether ``moment`` is the first instant of its local day (or unbounded)."""
+    return moment is None or moment == start_of_day(moment.date(), moment.tzinfo)  # type: ignore[arg-type]
+
+
+def interval_value(start: datetime | None, end: datetime | None) -> str:
+    """The ISO 8601 value of an interval that is not one named period.
+
+    Bounds on local day starts are written as calendar dates, the end date inclusive as ISO
+    8601 reads a date interval (``2026-03-01/2026-04-15``, ``../2026-02-28``, ``2026-03-01/..``);
+    other bounds as date-times with offset (``2026-11-25T10:00:00+01:00/2026-12-02T10:00:00+01:00``).
+    ``..`` is an open end (ISO 8601-2).
+    """
+    if is_day_start(start) and is_day_start(end):
+        first = ".." if start is None else start.date().isoformat()
+        last = ".." if end is None else (end.date() - timedelta(days=1)).isoformat()
+        return f"{first}/{last}"
     return f"{iso(start)}/{iso(end)}"
+
+
+def open_value(start: datetime | None, end: datetime | None, day_aligned: bool = True) -> str:
+    """The value of a half-bounded interval (see :func:`interval_value`)."""
+    return interval_value(start, end)
 
 
 def reading(interval: Interval, rid: str, note: str, policy: str | None = None) -> Reading:

@@ -586,7 +586,8 @@ R11 = [
          alts=(alt("R11", _FUT, joined(day(date(2027, 3, 3)), day(date(2027, 3, 17)))),)),
     case("R11-en-from-ISO-date-to-ISO-date", "spend from 2025-01-01 to 2025-03-31",
          "from 2025-01-01 to 2025-03-31", "R11", joined(day(date(2025, 1, 1)), day(date(2025, 3, 31))),
-         f"{day(date(2025, 1, 1))[0]}/{day(date(2025, 3, 31))[1]}"),
+         # ISO 8601 writes a range of calendar dates with its last day included.
+         "2025-01-01/2025-03-31"),
     case("R11-en-ISO-date-en-dash-ISO-date", "spend 2025-01-01 \u2013 2025-01-31",
          "2025-01-01 \u2013 2025-01-31", "R11", joined(day(date(2025, 1, 1)), day(date(2025, 1, 31)))),
     case("R11-en-from-last-week-to-this-week", "bugs from last week to this week",
