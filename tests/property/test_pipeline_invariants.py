@@ -140,6 +140,19 @@ def test_last_week_ends_at_this_weeks_start_and_next_week_starts_at_its_end(now,
     assert utc(last[1]) <= utc(now) < utc(nxt[0])
 
 
+@SETTINGS
+@given(now=moments, week_start=week_starts, unit=st.sampled_from(["hour", "minute"]))
+@with_pinned(unit="hour")
+def test_last_this_and_next_hour_and_minute_adjoin_and_contain_now(now, week_start, unit):
+    ctx = ctx_for(now, week_start)
+    tz = ctx.zone
+    last, this, nxt = (bounds(only(f"{w} {unit}", ctx), tz) for w in ("last", "this", "next"))
+    assert utc(last[1]) == utc(this[0]) and utc(this[1]) == utc(nxt[0])
+    assert utc(this[0]) <= utc(now) < utc(this[1])
+    for start, end in (last, this, nxt):
+        assert timedelta(0) < utc(end) - utc(start) <= ELAPSED[unit]
+
+
 # --- months, quarters, years ------------------------------------------------------------------
 
 
@@ -251,7 +264,7 @@ DAY_PHRASES = (
     "last month", "this quarter", "next quarter", "this year", "last year", "2 days ago",
     "in 3 weeks", "last Monday", "next Friday", "this Sunday", "this weekend", "last weekend",
 )
-SUBDAY_PHRASES = ("this hour", "3 hours ago", "in 2 hours", "5 minutes ago", "in 10 minutes")
+SUBDAY_PHRASES = ("this hour", "last hour", "next hour", "3 hours ago", "in 2 hours", "5 minutes ago", "in 10 minutes")
 
 
 @SETTINGS
