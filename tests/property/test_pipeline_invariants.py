@@ -13,7 +13,7 @@ Properties of :func:`nlnorm.normalize` on English phrases, for reference instant
 from __future__ import annotations
 
 import calendar
-from datetime import date, datetime, time, timedelta, timezone
+from datetime import datetime, time, timedelta, timezone
 from zoneinfo import ZoneInfo
 
 from dateutil.relativedelta import relativedelta
