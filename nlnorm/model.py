@@ -94,6 +94,7 @@ class Candidate:
     connective: str | None = None
     parts: tuple["Candidate", ...] = ()
     confidence: float = 1.0
+    nameable: bool = False  # a weak full month/weekday name that capitals can make a name
 
     def slot(self, name: str, default: object = None) -> object:
         for key, value in self.slots:

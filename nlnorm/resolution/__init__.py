@@ -84,7 +84,7 @@ def resolve_meaning(m: Meaning, ctx: "Context", rid: str = "", lang: str = "en")
     if isinstance(m, ShiftPeriod):
         return relative.shift_period_(m, ctx)
     if isinstance(m, Offset):
-        return relative.offset(m, ctx)
+        return relative.offset(m, ctx, rid)
     if isinstance(m, Rolling):
         return relative.rolling(m, ctx)
     if isinstance(m, ToDate):

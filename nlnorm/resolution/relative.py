@@ -62,8 +62,8 @@ def shift_period_(m: ShiftPeriod, ctx: "Context") -> Outcome:
     return reading(interval, "R2", f"the whole calendar {m.grain.value} {which}{extra}"), ()
 
 
-def offset(m: Offset, ctx: "Context") -> Outcome:
-    rid = "R3" if m.n < 0 else "R4"
+def offset(m: Offset, ctx: "Context", rid: str = "") -> Outcome:
+    rid = rid if rid in ("R3", "R4") else ("R3" if m.n < 0 else "R4")  # "0 days ago" is R3
     if m.grain in _SUBDAY:
         interval = _period(add_units(ctx.now, m.grain, m.n), m.grain, ctx)
     else:

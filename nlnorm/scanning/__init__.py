@@ -130,7 +130,9 @@ def _candidate(m, form, scanner: Scanner, prepared: Prepared) -> Candidate:  # t
         prev = prepared.text[max(0, m.start() - 24) : m.start()].split()
         if prev and prev[-1].strip(":#-") in lex.not_temporal:
             weak = True
-    return Candidate(Span(m.start(), m.end()), form.lang, form.reading, tuple(slots), weak)
+    nameable = weak and form.single in ("month_wide", "weekday") and not form.weak
+    return Candidate(Span(m.start(), m.end()), form.lang, form.reading, tuple(slots), weak,
+                     nameable=nameable)
 
 
 def text_starts_digit(text: str, pos: int) -> bool:

@@ -167,7 +167,7 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
                                  parts=(a,)))
             i += 1
             continue
-        if a.weak and not _is_name(prepared, a, scanner):
+        if a.weak and not (a.nameable and _is_name(prepared, a, scanner)):
             i += 1
             continue
         out.append(replace(a, weak=False) if a.weak else a)
