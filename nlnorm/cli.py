@@ -43,8 +43,15 @@ def _context_options(p: argparse.ArgumentParser, demo: bool = False) -> None:
                    help="order of numeric dates (default: the locale's CLDR short date format)")
 
 
+class _Parser(argparse.ArgumentParser):
+    """argparse with one-line errors: ``nlnorm: error: <what was wrong>; see <prog> --help``."""
+
+    def error(self, message: str) -> Any:  # type: ignore[override]
+        self.exit(2, f"nlnorm: error: {message}; see '{self.prog} --help'\n")
+
+
 def _parser() -> argparse.ArgumentParser:
-    p = argparse.ArgumentParser(
+    p = _Parser(
         prog="nlnorm",
         description="Rewrite the time phrases of work-tracker questions into explicit intervals.",
     )
@@ -76,6 +83,12 @@ def _parser() -> argparse.ArgumentParser:
 def _context(args: argparse.Namespace, default_now: str | None = None) -> Any:
     from .context import Context
 
+    for flag in ("now", "tz", "locale", "lang"):
+        value = getattr(args, flag, None)
+        if value is not None and not value.strip():
+            from .errors import ContextError
+
+            raise ContextError(f"--{flag} was given an empty value")
     now: Any = args.now or default_now
     tz = args.tz
     if now is None:
@@ -121,6 +134,7 @@ def main(argv: Sequence[str] | None = None) -> int:
         if args.command == "schema":
             from .schema import Result
 
+            _utf8(sys.stdout)
             print(json.dumps(Result.model_json_schema(), indent=2, ensure_ascii=False))
             return 0
     except NlnormError as exc:
@@ -132,10 +146,38 @@ def main(argv: Sequence[str] | None = None) -> int:
     return 2
 
 
+def _utf8(stream: Any) -> None:
+    """Make a standard stream read or write UTF-8 (the encoding of JSON and JSON Lines),
+    whatever the platform's locale. On input, lines end at "\\n" only (a stray "\\r" stays in
+    its line), and undecodable bytes are kept as surrogate escapes so that the line holding
+    them can be reported instead of ending the run."""
+    reconfigure = getattr(stream, "reconfigure", None)
+    if reconfigure is None:  # not a real stream (a test's StringIO)
+        return
+    if stream is sys.stdin:
+        reconfigure(encoding="utf-8", errors="surrogateescape", newline="\n")
+    elif (stream.encoding or "").lower().replace("-", "") != "utf8":
+        reconfigure(encoding="utf-8")
+
+
+def _is_text(value: str) -> bool:
+    """Whether ``value`` is valid Unicode text (no lone surrogates, e.g. from bad UTF-8 bytes)."""
+    try:
+        value.encode("utf-8")
+    except UnicodeEncodeError:
+        return False
+    return True
+
+
 def _normalize(args: argparse.Namespace) -> int:
+    from .errors import InputError
     from .pipeline import normalize
 
-    result = normalize(args.text, _context(args))
+    if not _is_text(args.text):
+        raise InputError("the question is not valid UTF-8 text")
+    ctx = _context(args)
+    _utf8(sys.stdout)
+    result = normalize(args.text, ctx)
     indent = args.indent or None
     print(result.model_dump_json(indent=indent))
     return 0
@@ -143,14 +185,16 @@ def _normalize(args: argparse.Namespace) -> int:
 
 def _open_in(name: str) -> IO[str]:
     if name == "-":
+        _utf8(sys.stdin)
         return sys.stdin
-    return open(name, encoding="utf-8", newline="")
+    return open(name, encoding="utf-8", errors="surrogateescape", newline="\n")
 
 
 def _open_out(name: str) -> IO[str]:
     if name == "-":
+        _utf8(sys.stdout)
         return sys.stdout
-    return open(name, "w", encoding="utf-8")
+    return open(name, "w", encoding="utf-8", newline="")
 
 
 def _batch(args: argparse.Namespace) -> int:
@@ -159,7 +203,7 @@ def _batch(args: argparse.Namespace) -> int:
     sink = _open_out(args.output)
     show = args.progress if args.progress is not None else sys.stderr.isatty()
     total = None
-    if show and args.input != "-":
+    if show and args.input != "-" and Path(args.input).is_file():  # a pipe can be read once
         with open(args.input, "rb") as fh:
             total = sum(1 for _ in fh)
     started = time.perf_counter()
@@ -181,38 +225,30 @@ def run_batch(source: IO[str], sink: IO[str], ctx: Any, progress: bool = False,
     """Normalize each JSONL line of ``source`` into ``sink``; returns (lines, mentions, errors).
 
     Exactly one output line per input line, in order; a bad line gets its error and the rest
-    go on.
+    go on. A byte order mark at the start of a line is ignored (RFC 8259, section 8.1). The
+    progress bar, if any, goes to stderr.
     """
-    from .pipeline import normalize_item
+    from .pipeline import json_kind, normalize_item
     from .schema import Result
 
     cache: dict[Any, Any] = {}
     lines = mentions = errors = 0
     bar = None
     if progress:
+        from rich.console import Console
         from rich.progress import Progress
 
-        bar = Progress(transient=True)
+        console = Console(stderr=True)
+        # On a terminal the bar is redrawn and removed at the end; elsewhere (a log file) it is
+        # written once, finished.
+        bar = Progress(console=console, transient=console.is_terminal)
         bar.start()
         task = bar.add_task("normalizing", total=total)
     try:
         for number, line in enumerate(source, start=1):
             lines += 1
-            raw = line.rstrip("\r\n")
-            item: Any
-            try:
-                if not raw.strip():
-                    raise ValueError("empty line; expected a JSON object with 'text'")
-                item = json.loads(raw)
-            except ValueError as exc:
-                message = str(exc) if "empty line" in str(exc) else f"not valid JSON ({exc})"
-                result = Result(id=None, text=None, error=f"line {number}: {message}")
-            else:
-                result = normalize_item(item, ctx, cache) if isinstance(item, dict) else Result(
-                    id=None, text=None,
-                    error=f"line {number}: expected a JSON object with 'text', got {type(item).__name__}")
-                if result.error and not result.error.startswith("line "):
-                    result = result.model_copy(update={"error": f"line {number}: {result.error}"})
+            raw = line.rstrip("\r\n").removeprefix("\ufeff")
+            result = _batch_line(number, raw, ctx, cache, normalize_item, json_kind, Result)
             if result.error:
                 errors += 1
             mentions += len(result.mentions)
@@ -224,6 +260,40 @@ def run_batch(source: IO[str], sink: IO[str], ctx: Any, progress: bool = False,
         if bar is not None:
             bar.stop()
     return lines, mentions, errors
+
+
+def _batch_line(number: int, raw: str, ctx: Any, cache: dict[Any, Any], normalize_item: Any,
+                json_kind: Any, result_cls: Any) -> Any:
+    """The result of one batch line; never raises, its error starts with ``line N:``."""
+
+    def failed(message: str, item_id: Any = None) -> Any:
+        return result_cls(id=item_id, text=None, error=f"line {number}: {message}")
+
+    if not _is_text(raw):
+        at = next(i for i, ch in enumerate(raw) if "\ud800" <= ch <= "\udfff")
+        code = ord(raw[at])
+        what = f"byte 0x{code - 0xDC00:02x}" if 0xDC80 <= code <= 0xDCFF else f"U+{code:04X}"
+        return failed(f"not valid UTF-8 ({what} at character {at + 1}); JSON Lines files are UTF-8")
+    if not raw.strip():
+        return failed("empty line; expected a JSON object with 'text'")
+    try:
+        item = json.loads(raw)
+    except json.JSONDecodeError as exc:
+        return failed(f"not valid JSON: {exc.msg} at character {exc.colno}")
+    if not isinstance(item, dict):
+        return failed(f"expected a JSON object with 'text', got {json_kind(item)}")
+    if "\\u" in raw and not _is_text(json.dumps(item, ensure_ascii=False)):
+        item_id = item.get("id")
+        return failed("a \\u escape stands for a lone UTF-16 surrogate, which is not text",
+                      item_id if _is_text(json.dumps(item_id, ensure_ascii=False)) else None)
+    try:
+        result = normalize_item(item, ctx, cache)
+    except Exception as exc:  # a bug in nlnorm must not cost the rest of the run
+        return failed(f"internal error while normalizing ({type(exc).__name__}: {exc}); "
+                      "please report it with this line", item.get("id"))
+    if result.error:
+        result = result.model_copy(update={"error": f"line {number}: {result.error}"})
+    return result
 
 
 def _demo_path(given: str | None) -> Path:
@@ -246,14 +316,15 @@ def _demo(args: argparse.Namespace) -> int:
     path = _demo_path(args.input)
     ctx = _context(args, default_now=DEMO_NOW)
     out = io.StringIO()
-    with open(path, encoding="utf-8") as fh:
+    with open(path, encoding="utf-8", errors="surrogateescape", newline="\n") as fh:
         lines, mentions, errors = run_batch(fh, out, ctx)
     if args.json:
+        _utf8(sys.stdout)
         sys.stdout.write(out.getvalue())
         return 0
     print(f"nlnorm demo: {path.name}, now={ctx.now.isoformat()} tz={ctx.tz} "
           f"week_start={ctx.week_start} locale={ctx.locale}\n")
-    for raw in out.getvalue().splitlines():
+    for raw in out.getvalue().split("\n")[:-1]:  # not splitlines(): text may hold U+2028
         result = json.loads(raw)
         qid = result.get("id") or "-"
         if result.get("error"):

@@ -41,8 +41,18 @@ def zone(name: str) -> ZoneInfo:
         return ZoneInfo(name)
     except (ZoneInfoNotFoundError, ValueError, OSError):
         raise ContextError(
-            f"tz={name!r} is not an IANA time zone{suggest(name, _all_zones())}"
+            f"tz={name!r} is not an IANA time zone{_suggest_zone(name)}"
         ) from None
+
+
+def _suggest_zone(name: str) -> str:
+    """``"; did you mean 'Europe/Berlin'?"`` for a misspelt zone or a bare city ("berlin")."""
+    close = suggest(name, _all_zones())
+    if close:
+        return close
+    city = name.strip().replace(" ", "_").lower()
+    same = sorted(z for z in _all_zones() if "/" in z and z.rsplit("/", 1)[1].lower() == city)
+    return f"; did you mean {same[0]!r}?" if same else ""
 
 
 def _parse_now(value: Any) -> datetime:
@@ -216,6 +226,8 @@ class Context(BaseModel):
             from . import cldr
 
             object.__setattr__(self, "week_start", WEEKDAYS[cldr.first_week_day(self.locale)])
+            # Derived, not given: replace() derives it again for another locale.
+            self.__pydantic_fields_set__.discard("week_start")
         return self
 
     # --- derived values (cheap, computed on use) ------------------------------------------
@@ -231,12 +243,14 @@ class Context(BaseModel):
         return WEEKDAYS.index(self.week_start or "monday")
 
     def replace(self, **changes: Any) -> "Context":
-        """Return a new context with some fields changed (validated again)."""
+        """Return a new context with some fields changed (validated again).
+
+        A new ``tz`` without a new ``now`` keeps the instant. A week start that was derived from
+        the locale is derived again from a new ``locale``; one that was given is kept.
+        """
         data = self.model_dump()
-        if "now" not in changes and ("tz" in changes):
-            data["now"] = self.now
-        if "locale" in changes and "week_start" not in changes:
-            data["week_start"] = None
+        if "week_start" not in self.model_fields_set:
+            del data["week_start"]
         data.update(changes)
         return Context.model_validate(data)
 

@@ -14,8 +14,8 @@ from __future__ import annotations
 from collections.abc import Iterable, Iterator, Mapping
 from typing import Any
 
-from .context import Context
-from .errors import InputError, NlnormError
+from .context import Context, _parse_now
+from .errors import ContextError, InputError, NlnormError
 from .parsing import parse
 from .preparing import prepare
 from .resolution import resolve
@@ -79,16 +79,24 @@ def normalize_item(
         if isinstance(item, str):
             return normalize(item, ctx)
         if not isinstance(item, Mapping):
-            raise InputError(
-                f"expected a JSON object with 'text', got {type(item).__name__}"
-            )
+            raise InputError(f"expected a JSON object with 'text', got {json_kind(item)}")
         item_id = item.get("id")
         text = item.get("text")
         if text is None:
-            raise InputError("missing field 'text' (the question to normalize)")
+            found = ", ".join(repr(str(k)) for k in item) or "none"
+            what = "is null" if "text" in item else f"is missing (fields found: {found})"
+            raise InputError(f"field 'text' (the question to normalize) {what}")
         if not isinstance(text, str):
-            raise InputError(f"field 'text' must be a string, got {type(text).__name__}")
+            raise InputError(f"field 'text' must be a string, got {json_kind(text)}")
         overrides = _overrides(item)
+        if "now" in overrides and "tz" not in overrides:
+            now = _parse_now(overrides["now"])
+            if now.utcoffset() is None:
+                raise ContextError(
+                    f"now={overrides['now']!r} has no UTC offset and the item gives no tz; add "
+                    "a tz (an IANA name such as 'Europe/Berlin') or write the offset, e.g. "
+                    "'2026-12-02T10:00:00+01:00'"
+                )
         local = ctx
         if overrides:
             key = tuple(sorted((k, repr(v)) for k, v in overrides.items()))
@@ -103,6 +111,23 @@ def normalize_item(
         return Result(id=item_id, text=text if isinstance(text, str) else None, error=str(exc))
 
 
+def json_kind(value: object) -> str:
+    """The JSON name of a value's type: null, boolean, number, string, array or object."""
+    if value is None:
+        return "null"
+    if isinstance(value, bool):
+        return "boolean"
+    if isinstance(value, (int, float)):
+        return "number"
+    if isinstance(value, str):
+        return "string"
+    if isinstance(value, (list, tuple)):
+        return "array"
+    if isinstance(value, Mapping):
+        return "object"
+    return type(value).__name__
+
+
 def _overrides(item: Mapping[str, Any]) -> dict[str, Any]:
     out: dict[str, Any] = {}
     for key in _CONTEXT_FIELDS:
@@ -114,12 +139,7 @@ def _overrides(item: Mapping[str, Any]) -> dict[str, Any]:
 
 
 def context_with(ctx: Context, overrides: Mapping[str, Any]) -> Context:
-    """``ctx`` with some fields replaced; a new ``tz`` without a new ``now`` keeps the instant."""
-    data: dict[str, Any] = ctx.model_dump()
-    changes = dict(overrides)
-    if "tz" in changes and "now" not in changes:
-        data["now"] = ctx.now
-    if "locale" in changes and "week_start" not in changes:
-        data["week_start"] = None
-    data.update(changes)
-    return Context.model_validate(data)
+    """``ctx`` with some fields replaced (:meth:`Context.replace`): a new ``tz`` without a new
+    ``now`` keeps the instant; a week start derived from the locale follows a new ``locale``,
+    a given one is kept."""
+    return ctx.replace(**dict(overrides))
