@@ -128,7 +128,11 @@ def annotate(prepared: Prepared, resolved: tuple[Resolved, ...], ctx: "Context",
         )
         name = f"t{index}"
         rewritten.append(original[cursor:start])
-        rewritten.append(explicit(iv, r.kind))
+        if r.kind is Kind.DURATION:
+            # "3 days" is already unambiguous; the ISO duration is added for a model.
+            rewritten.append(f"{original[start:end]} ({iv.value})")
+        else:
+            rewritten.append(explicit(iv, r.kind))
         template.append(original[cursor:start])
         template.append("{" + name + "}")
         slots[name] = built(Slot, start=s, end=e, value=iv.value, kind=r.kind.value, grain=iv.grain.value)
