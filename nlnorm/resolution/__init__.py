@@ -8,7 +8,7 @@ with the context policy that would select each. Nothing here reads a clock: "now
 from __future__ import annotations
 
 from datetime import timedelta
-from typing import TYPE_CHECKING
+from typing import TYPE_CHECKING, Any, Callable
 
 from ..model import (
     Between,
@@ -78,36 +78,10 @@ def _kind(m: Meaning) -> Kind:
 
 
 def resolve_meaning(m: Meaning, ctx: "Context", rid: str = "", lang: str = "en") -> Outcome | None:
-    """Resolve one meaning; ``rid`` is the reading id the form declared."""
-    if isinstance(m, RelativeDay):
-        return relative.relative_day(m, ctx)
-    if isinstance(m, ShiftPeriod):
-        return relative.shift_period_(m, ctx)
-    if isinstance(m, Offset):
-        return relative.offset(m, ctx, rid)
-    if isinstance(m, Rolling):
-        return relative.rolling(m, ctx)
-    if isinstance(m, ToDate):
-        return relative.to_date(m, ctx)
-    if isinstance(m, DayPeriodRef):
-        return relative.day_period(m, ctx)
-    if isinstance(m, WeekendRef):
-        return relative.weekend(m, ctx)
-    if isinstance(m, WeekdayCount):
-        return relative.weekday_count(m, ctx)
-    if isinstance(m, Now):
-        return relative.now(m, ctx)
-    if isinstance(m, Duration):
-        return relative.duration(m, ctx)
-    if isinstance(m, DateRef):
-        return absolute.date_ref(m, ctx, rid, lang)
-    if isinstance(m, WeekdayRef):
-        return absolute.weekday(m, ctx, lang)
-    if isinstance(m, Bounded):
-        return _bounded(m, ctx, lang)
-    if isinstance(m, Between):
-        return _between(m, ctx, lang)
-    return None
+    """Resolve one meaning; ``rid`` is the reading id the form declared, ``lang`` the language
+    of the phrase (for its day periods and weekday usage)."""
+    resolver = _RESOLVERS.get(type(m))
+    return None if resolver is None else resolver(m, ctx, rid, lang)
 
 
 def _bounded(m: Bounded, ctx: "Context", lang: str) -> Outcome | None:
@@ -190,3 +164,22 @@ def _resolve_end(first: Meaning, last: Meaning, start: Interval, ctx: "Context",
                        "range end: the first such day on or after the start"), ()
     return resolve_meaning(last, ctx, "", lang)
 
+
+
+# One resolver per meaning type: (meaning, ctx, declared reading id, language) -> outcome.
+_RESOLVERS: dict[type, Callable[[Any, "Context", str, str], Outcome | None]] = {
+    RelativeDay: lambda m, ctx, rid, lang: relative.relative_day(m, ctx),
+    ShiftPeriod: lambda m, ctx, rid, lang: relative.shift_period_(m, ctx),
+    Offset: lambda m, ctx, rid, lang: relative.offset(m, ctx, rid),
+    Rolling: lambda m, ctx, rid, lang: relative.rolling(m, ctx),
+    ToDate: lambda m, ctx, rid, lang: relative.to_date(m, ctx),
+    DayPeriodRef: lambda m, ctx, rid, lang: relative.day_period(m, ctx),
+    WeekendRef: lambda m, ctx, rid, lang: relative.weekend(m, ctx),
+    WeekdayCount: lambda m, ctx, rid, lang: relative.weekday_count(m, ctx),
+    Now: lambda m, ctx, rid, lang: relative.now(m, ctx),
+    Duration: lambda m, ctx, rid, lang: relative.duration(m, ctx),
+    DateRef: lambda m, ctx, rid, lang: absolute.date_ref(m, ctx, rid, lang),
+    WeekdayRef: lambda m, ctx, rid, lang: absolute.weekday(m, ctx, lang),
+    Bounded: lambda m, ctx, rid, lang: _bounded(m, ctx, lang),
+    Between: lambda m, ctx, rid, lang: _between(m, ctx, lang),
+}
