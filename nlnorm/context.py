@@ -84,7 +84,9 @@ class Context(BaseModel):
 
     Attributes:
         now: the reference instant, aware; converted into ``tz``. A naive value is accepted only
-            together with ``tz`` and is read as wall-clock time there.
+            together with ``tz`` and is read as wall-clock time there: an ambiguous one (the
+            clocks set back) as the earlier instant unless ``fold=1``, a skipped one (the clocks
+            set forward) as the first instant after the gap.
         tz: IANA zone name. Defaults to the zone of an aware ``now`` when that is a ZoneInfo,
             or ``"UTC"`` when ``now`` is in UTC.
         week_start: ``monday`` | ``sunday`` | ``saturday``; default from CLDR week data for the
@@ -154,6 +156,7 @@ class Context(BaseModel):
     def _v_week_start(cls, value: Any) -> Any:
         if value is None or value == "":
             return None
+        given = value
         if isinstance(value, int) and not isinstance(value, bool) and 0 <= value <= 6:
             value = WEEKDAYS[value]
         if isinstance(value, str):
@@ -164,7 +167,7 @@ class Context(BaseModel):
                 if len(low) >= 2 and name.startswith(low):
                     return name
         raise ContextError(
-            f"week_start={value!r} is not supported; expected 'monday', 'sunday' or 'saturday'"
+            f"week_start={given!r} is not supported; expected 'monday', 'sunday' or 'saturday'"
         )
 
     @field_validator("locale", mode="before")
@@ -219,7 +222,16 @@ class Context(BaseModel):
                 "pass tz='Europe/Berlin' (an IANA name) so that days and weeks follow the "
                 "zone's daylight-saving rules"
             )
-        local = now.replace(tzinfo=tzinfo_) if now.tzinfo is None else now.astimezone(tzinfo_)
+        if now.tzinfo is None:
+            local = now.replace(tzinfo=tzinfo_)
+            wall = local.astimezone(timezone.utc).astimezone(tzinfo_).replace(tzinfo=None)
+            if wall.replace(fold=0) != now.replace(fold=0):
+                # A wall time the clocks skipped: the first instant after the gap, as periods do.
+                from .calendars import local_instant
+
+                local = local_instant(now.replace(fold=0), tzinfo_)
+        else:
+            local = now.astimezone(tzinfo_)
         object.__setattr__(self, "now", local)
         object.__setattr__(self, "tz", tz_name)
         if self.week_start is None:

@@ -1,14 +1,12 @@
-"""``nlnorm batch``: one output line per input line, in order; a bad line carries its error and
-the rest go on.
-
-Checked against: JSON Lines format (jsonlines.org: UTF-8, one JSON value per line, lines end
+"""Checked against: JSON Lines format (jsonlines.org: UTF-8, one JSON value per line, lines end
 with "\\n", a trailing "\\r" is allowed); RFC 8259 section 8.1 (a parser may ignore a UTF-8 byte
 order mark) and section 7 (control characters must be escaped inside strings); IANA tz database
 via zoneinfo/tzdata (Europe/Lisbon is UTC+00:00 and America/New_York UTC-05:00 in December
 2026); CLDR 49 week data via babel 2.19 (weeks start on Sunday in en_US, Monday in en_GB);
 hand-computed calendar facts (2 December 2026 is a Wednesday).
 
-Every run uses a fixed ``--now``.
+``nlnorm batch``: one output line per input line, in order; a bad line carries its error and
+the rest go on. Every run uses a fixed ``--now``.
 """
 
 from __future__ import annotations

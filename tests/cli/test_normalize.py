@@ -1,13 +1,12 @@
-"""``nlnorm normalize``, ``nlnorm demo``, ``nlnorm schema`` and ``python -m nlnorm``.
-
-Checked against: JSON Schema draft 2020-12 via the jsonschema package (docs/schema.json and the
+"""Checked against: JSON Schema draft 2020-12 via the jsonschema package (docs/schema.json and the
 output of ``nlnorm schema``); IANA tz database via zoneinfo/tzdata (Europe/Berlin is UTC+01:00
 and America/New_York UTC-05:00 in December 2026); CLDR 49 week data and short date formats via
 babel 2.19 (en_US: weeks start on Sunday, month/day/year; en_GB: Monday, day/month/year);
 docs/readings.md (what each policy option selects); hand-computed calendar facts (2 December
 2026 is a Wednesday).
 
-Every run passes ``--now`` except the one test that checks the current time is used without it.
+``nlnorm normalize``, ``nlnorm demo``, ``nlnorm schema`` and ``python -m nlnorm``. Every run
+passes ``--now`` except the one test that checks the current time is used without it.
 """
 
 from __future__ import annotations
