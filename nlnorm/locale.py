@@ -32,9 +32,17 @@ RELATIONS = (
     "from",
     "between",
     "range_join",
+    "between_join",
     "since_suffix",
+    "from_suffix",
+    "since_post",
+    "after_post",
+    "before_post",
+    "until_post",
     "deadline",
 )
+#: Relations of words that follow the phrase they bind (postpositions, "onwards").
+POST_RELATIONS = frozenset({"since_suffix", "from_suffix", "since_post", "after_post", "before_post", "until_post"})
 
 
 def locales_dir() -> Path:
@@ -57,6 +65,7 @@ class Meta(_Strict):
     spaces: bool = True
     case_marks_names: bool = False
     weekday_reading: Literal["nearest", "week"] = "nearest"
+    particles: tuple[str, ...] = ()  # case endings glued to a phrase ("지난주에", "haftaki")
     sources: tuple[str, ...] = ()
 
 

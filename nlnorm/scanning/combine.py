@@ -60,6 +60,24 @@ def _is_name(prepared: Prepared, c: Candidate, scanner: Scanner) -> bool:
     return _SENTENCE_END.search(original[:start]) is None
 
 
+def _group(m: "re.Match[str]", *names: str) -> str | None:
+    for name in names:
+        if m.group(name) is not None:
+            return m.group(name)
+    return None
+
+
+def _start(m: "re.Match[str]", *names: str) -> int:
+    for name in names:
+        if m.group(name) is not None:
+            return m.start(name)
+    return m.start()
+
+
+_POST_BOUND = {"since_post": "since", "since_suffix": "since", "after_post": "after",
+               "before_post": "before", "until_post": "until"}
+
+
 def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tuple[Candidate, ...]:
     """Attach connectives, join ranges and drop weak phrases without a cue."""
     text = prepared.text
@@ -68,29 +86,37 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
     i = 0
     n = len(found)
     last_words = conn.last_words
+    glued_tails = conn.glued_tails
     while i < n:
         a = found[i]
         # Cheap test first: is the word before the phrase the end of some connective?
         k = a.span.start - 1
         pre = None
-        if k > 0 and text[k] == " ":
-            j = text.rfind(" ", 0, k) + 1
-            if text[j:k] in last_words:
-                pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)
-        pre_word = pre.group("c") if pre else None
+        if k >= 0 and (text[k] in glued_tails or (
+                k > 0 and text[k] == " " and text[text.rfind(" ", 0, k) + 1:k] in last_words)):
+            pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)
+        pre_word = _group(pre, "c", "c2") if pre else None
+        pre_start = _start(pre, "c", "c2") if pre else a.span.start
         pre_rel = _relations(scanner, pre_word, a.lang) if pre_word else frozenset()
+        if pre and out and out[-1].span.end > pre_start:
+            pre, pre_word, pre_rel, pre_start = None, None, frozenset(), a.span.start
 
-        # Ranges: "between X and Y", "from X to Y", "X - Y".
+        # Ranges: "between X and Y", "from X to Y", "X - Y", "3月から5月まで".
         if i + 1 < n:
             b = found[i + 1]
             gap = conn.join.fullmatch(text, a.span.end, b.span.start)
             if gap is not None:
-                is_and = gap.group("j") is not None and "between" not in pre_rel and _is_and(
-                    scanner, gap.group("j"), a.lang
-                )
-                if not is_and and (not (a.weak and b.weak) or pre_rel & {"between", "from"}):
-                    start = pre.start("c") if pre_rel & {"between", "from"} else a.span.start
-                    out.append(_range(a, b, start, b.span.end, pre_word, scanner))
+                word = _group(gap, "j", "j2")
+                needs_between = word is not None and _is_and(scanner, word, a.lang)
+                if (not needs_between or "between" in pre_rel) and (
+                        not (a.weak and b.weak) or pre_rel & {"between", "from"}):
+                    start = pre_start if pre_rel & {"between", "from"} else a.span.start
+                    end = b.span.end
+                    post = conn.suffix.match(text, end)
+                    if post is not None and _relations(scanner, _group(post, "s", "s2") or "", b.lang) \
+                            & {"until_post"}:
+                        end = post.end()  # "まで" closing a range
+                    out.append(_range(a, b, start, end, pre_word, scanner))
                     i += 2
                     continue
         # "March 3-17", "between March 3 and 17".
@@ -104,7 +130,7 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
                     Span(m.start("d"), m.end()), a.lang, "R18" if year else a.reading,
                     _slots(a, day=int(m.group("d")), year=year),
                 )
-                start = pre.start("c") if pre_rel & {"between", "from"} else a.span.start
+                start = pre_start if pre_rel & {"between", "from"} else a.span.start
                 out.append(_range(first, last, start, m.end(), pre_word, scanner))
                 i += 1
                 continue
@@ -125,18 +151,35 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
                     i += 1
                     continue
 
+        # A word after the phrase: "March onwards", "geçen haftadan beri", "先週から", "3月まで".
+        post = conn.suffix.match(text, a.span.end)
+        post_word = _group(post, "s", "s2") if post else None
+        post_rel = _relations(scanner, post_word, a.lang) if post_word else frozenset()
+        if "from_suffix" in post_rel and "from" in pre_rel:
+            post_rel = post_rel | {"since_suffix"}  # "from X on"
+        bound = next((_POST_BOUND[r] for r in ("since_post", "after_post", "before_post",
+                                                 "until_post", "since_suffix") if r in post_rel), None)
+        if bound is not None and post is not None:
+            start = pre_start if pre_rel & {"from", "since", "within", "after", "before", "until"} \
+                and _BOUND.get(next((r for r in ("since", "after", "before", "until") if r in pre_rel), ""), "") \
+                in ("", _BOUND[bound]) else a.span.start
+            if pre_rel & {"from", "within"}:
+                start = pre_start
+            lang = _connective_lang(scanner, post_word or "", a.lang)
+            out.append(Candidate(Span(start, post.end()), lang, _BOUND[bound], connective=bound,
+                                 parts=(_deadline(a) if bound == "until" else a,)))
+            i += 1
+            continue
+
         # A single connective before the phrase.
-        if pre_rel and not (out and out[-1].span.end > pre.start("c")):
-            lang = _connective_lang(scanner, pre_word, a.lang)
-            start = pre.start("c")
+        if pre_rel:
+            lang = _connective_lang(scanner, pre_word or "", a.lang)
             relation = next((r for r in ("since", "after", "before", "until") if r in pre_rel), None)
             deadline = "deadline" in pre_rel
             inner = _deadline(a) if deadline else a
             if relation is not None:
-                out.append(
-                    Candidate(Span(start, a.span.end), lang, _BOUND[relation], connective=relation,
-                              parts=(inner,))
-                )
+                out.append(Candidate(Span(pre_start, a.span.end), lang, _BOUND[relation],
+                                     connective=relation, parts=(inner,)))
                 i += 1
                 continue
             if "due" in pre_rel:
@@ -144,29 +187,14 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
                 out.append(replace(inner, weak=False))
                 i += 1
                 continue
-            if "from" in pre_rel:
-                suffix = conn.suffix.match(text, a.span.end)
-                if suffix is not None:
-                    out.append(Candidate(Span(start, suffix.end()), lang, "R7", connective="since",
-                                         parts=(a,)))
-                    i += 1
-                    continue
             if pre_rel & {"within", "from"} or ("on_day" in pre_rel and _is_day(a)):
-                out.append(replace(a, span=Span(start, a.span.end), weak=False))
+                out.append(replace(a, span=Span(pre_start, a.span.end), weak=False))
                 i += 1
                 continue
             if pre_rel & {"cue", "on_day"}:
                 out.append(replace(a, weak=False))
                 i += 1
                 continue
-        # "March onwards".
-        suffix = conn.suffix.match(text, a.span.end)
-        if suffix is not None and "since_suffix" in _relations(scanner, suffix.group("s"), a.lang) \
-                and suffix.group("s") not in ("on",):
-            out.append(Candidate(Span(a.span.start, suffix.end()), a.lang, "R7", connective="since",
-                                 parts=(a,)))
-            i += 1
-            continue
         if a.weak and not (a.nameable and _is_name(prepared, a, scanner)):
             i += 1
             continue
@@ -176,8 +204,10 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
 
 
 def _is_and(scanner: Scanner, word: str, lang: str) -> bool:
-    # "and" joins a range only after "between"; other joiners ("to", "-") stand alone.
-    return word in ("and", "und", "et", "y", "e", "en", "i", "и", "і", "ve", "와", "과", "と", "和")
+    """Whether ``word`` joins a range only after "between" ("and"; not "to" or "-")."""
+    table = scanner.connectives.joins.get(" ".join(word.split()), {})
+    found = table.get(lang) or next(iter(table.values()), frozenset())
+    return "between_join" in found
 
 
 def _deadline(c: Candidate) -> Candidate:

@@ -23,7 +23,7 @@ import re
 from dataclasses import dataclass
 
 from ..errors import LocaleError
-from .lexicon import REGEX_CLASSES, TRIGGER_CLASSES, Lexicon
+from .lexicon import REGEX_CLASSES, TRIGGER_CLASSES, Lexicon, trie_regex
 
 __all__ = ["Form", "compile_form", "CANONICAL_SLOT"]
 
@@ -316,7 +316,13 @@ def compile_form(
     # The end of the form is marked by an empty group: in a combined expression the last group
     # to close names the form that matched. (The scanner checks the word boundary before a
     # form itself, so spaced forms need only the one after.)
-    regex = rf"(?:{regex})(?!\w)" if lex.spaces else regex
+    if lex.spaces and (lex.particles or lex.glue):
+        # Languages that glue endings and postpositions to words ("지난주에", "지난주부터").
+        ends = f"(?:{trie_regex(lex.particles)})?" if lex.particles else ""
+        glue = f"(?={trie_regex(lex.glue)})|" if lex.glue else ""
+        regex = rf"(?:{regex}){ends}(?:{glue}(?!\w))"
+    elif lex.spaces:
+        regex = rf"(?:{regex})(?!\w)"
     regex += f"(?P<f{order}_e>)"
     single = slots[0][1] if len(tokens) == 1 and len(slots) == 1 and not fixed else None
     pair_keys = _sample_keys(token_samples) if lex.spaces else None

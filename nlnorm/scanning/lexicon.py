@@ -13,7 +13,7 @@ from types import MappingProxyType
 from typing import Mapping
 
 from .. import cldr
-from ..locale import load_locale
+from ..locale import POST_RELATIONS, load_locale
 
 __all__ = ["Lexicon", "lexicon", "trie_regex", "REGEX_CLASSES", "collapse"]
 
@@ -96,6 +96,8 @@ class Lexicon:
     not_temporal: frozenset[str]
     case_marks_names: bool
     ordinal_suffixes: tuple[str, ...] = ()
+    particles: tuple[str, ...] = ()  # endings glued to a phrase, part of the mention
+    glue: tuple[str, ...] = ()  # words that may follow a phrase with no space (postpositions)
 
     def value(self, cls: str, text: str) -> object:
         """The value of ``text`` (as matched) in word class ``cls``."""
@@ -208,4 +210,7 @@ def lexicon(lang: str) -> Lexicon:
         not_temporal=data.not_temporal,
         case_marks_names=data.meta.case_marks_names,
         ordinal_suffixes=tuple(suffixes),
+        particles=tuple(p.lower() for p in data.meta.particles),
+        glue=tuple(sorted({w.lower() for rel, words in data.connectives.items()
+                           if rel in POST_RELATIONS for w in words})) if data.meta.particles else (),
     )

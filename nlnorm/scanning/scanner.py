@@ -19,6 +19,7 @@ from typing import Mapping
 from .. import cldr
 from ..locale import load_locale
 from .forms import Form, compile_form
+from ..locale import POST_RELATIONS
 from .lexicon import Lexicon, lexicon, trie_regex
 
 __all__ = ["Scanner", "scanner_for", "cldr_forms"]
@@ -35,7 +36,8 @@ class Connectives:
     day_start: re.Pattern[str]  # "3 -" before "17 March" (search, endpos)
     relations: Mapping[str, Mapping[str, frozenset[str]]]  # phrase -> lang -> relations
     joins: Mapping[str, Mapping[str, frozenset[str]]]
-    last_words: frozenset[str]  # the last word of every connective before a phrase
+    last_words: frozenset[str]  # the last word of every spaced connective before a phrase
+    glued_tails: frozenset[str]  # last characters of connectives written without a space
 
 
 @dataclass(frozen=True, slots=True)
@@ -163,45 +165,68 @@ def cldr_forms(lang: str) -> list[tuple[str, str, tuple[tuple[str, object], ...]
     return out
 
 
+def _either(spaced: list[str], unspaced: list[str], spaced_fmt: str, unspaced_fmt: str) -> str:
+    """One alternation of the spaced words (in ``spaced_fmt``) and the unspaced ones."""
+    parts = []
+    if spaced:
+        parts.append(spaced_fmt.format(trie_regex(sorted(spaced))))
+    if unspaced:
+        parts.append(unspaced_fmt.format(trie_regex(sorted(unspaced))))
+    return "|".join(parts) or "(?!)"
+
+
 def _connectives(languages: tuple[str, ...]) -> Connectives:
     relations: dict[str, dict[str, set[str]]] = defaultdict(lambda: defaultdict(set))
     joins: dict[str, dict[str, set[str]]] = defaultdict(lambda: defaultdict(set))
-    suffixes: set[str] = set()
     ordinal_suffixes: set[str] = set()
+    glued: set[str] = set()  # words written without a space: connectives of unspaced languages
     for lang in languages:
         data = load_locale(lang)
+        unspaced = not data.meta.spaces
         for relation, phrases in data.connectives.items():
             for phrase in phrases:
                 key = " ".join(phrase.lower().split())
+                if unspaced or relation in POST_RELATIONS and data.meta.particles:
+                    glued.add(key)
+                if not key[:1].isalnum():
+                    glued.add(key)  # "~", "-": no space needed
                 if relation == "range_join":
                     joins[key][lang].add("join")
-                elif relation == "since_suffix":
-                    suffixes.add(key)
-                    relations[key][lang].add("since_suffix")
+                elif relation == "between_join":
+                    joins[key][lang].add("between_join")
                 else:
                     relations[key][lang].add(relation)
         ordinal_suffixes.update(data.ordinal_suffixes)
-    before_words = [w for w, langs in relations.items() if any(r - {"since_suffix"} for r in langs.values())]
-    before = re.compile(rf"(?<!\w)(?P<c>{trie_regex(before_words) or '(?!)'})\s+$")
-    join_words = sorted(joins)
-    join_rx = trie_regex(join_words) or "(?!)"
-    join = re.compile(rf"(?:\s+(?P<j>{join_rx})\s+|\s*(?P<dash>-)\s*)")
-    suffix = re.compile(rf"\s+(?P<s>{trie_regex(sorted(suffixes)) or '(?!)'})(?!\w)")
+    before_words = [w for w, langs in relations.items()
+                    if any(r - POST_RELATIONS for r in langs.values())]
+    post_words = [w for w, langs in relations.items() if any(r & POST_RELATIONS for r in langs.values())]
+    before_alt = _either([w for w in before_words if w not in glued],
+                         [w for w in before_words if w in glued], r"(?<!\w)(?P<c>{})\s+", r"(?P<c2>{})\s*")
+    before = re.compile(rf"(?:{before_alt})$")
+    join_alt = _either([w for w in joins if w not in glued], [w for w in joins if w in glued],
+                       r"\s+(?P<j>{})\s+", r"\s*(?P<j2>{})\s*")
+    join = re.compile(rf"(?:{join_alt}|\s*(?P<dash>-)\s*)")
+    post_alt = _either([w for w in post_words if w not in glued], [w for w in post_words if w in glued],
+                       r"\s+(?P<s>{})(?!\w)", r"\s*(?P<s2>{})")
+    suffix = re.compile(post_alt)
     osfx = f"(?:{trie_regex(sorted(ordinal_suffixes))})?" if ordinal_suffixes else ""
+    spaced_join = trie_regex(sorted(w for w in joins if w not in glued)) or "(?!)"
     day_end = re.compile(
-        rf"(?:\s+(?P<j>{join_rx})\s+|\s*-\s*)(?:the\s+)?(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?![\w/.:-])"
+        rf"(?:\s+(?P<j>{spaced_join})\s+|\s*-\s*)(?:the\s+)?(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?![\w/.:-])"
         rf"(?:,?\s+(?P<y>(?:19|20)\d\d)(?!\w))?"
     )
+    spaced_before = trie_regex(sorted(w for w in before_words if w not in glued)) or "(?!)"
     day_start = re.compile(
-        rf"(?<!\w)(?:(?P<pre>{trie_regex(before_words) or '(?!)'})\s+)?(?:the\s+)?"
-        rf"(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?:\s+(?P<j>{join_rx})\s+|\s*-\s*)$"
+        rf"(?<!\w)(?:(?P<pre>{spaced_before})\s+)?(?:the\s+)?"
+        rf"(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?:\s+(?P<j>{spaced_join})\s+|\s*-\s*)$"
     )
     freeze = lambda table: MappingProxyType(  # noqa: E731
         {k: MappingProxyType({lg: frozenset(v) for lg, v in d.items()}) for k, d in table.items()}
     )
-    last_words = frozenset(w.split()[-1] for w in before_words if w.split())
+    last_words = frozenset(w.split()[-1] for w in before_words if w.split() and w not in glued)
+    glued_tails = frozenset(w[-1] for w in before_words if w in glued)
     return Connectives(before, join, suffix, day_end, day_start, freeze(relations), freeze(joins),
-                       last_words)
+                       last_words, glued_tails)
 
 
 @functools.lru_cache(maxsize=64)
@@ -235,7 +260,8 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
                     order += 1
     curated: dict[object, list[Form]] = defaultdict(list)
     generated: dict[object, list[Form]] = defaultdict(list)
-    leaders: set[str] = set()
+    leaders_spaced: set[str] = set()
+    leaders_unspaced: set[str] = set()
     for form in forms:
         target = generated if form.fixed else curated
         if form.spaced:
@@ -247,7 +273,7 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
         else:
             for ch in form.first_chars:
                 target["c:" + ch].append(form)
-        leaders |= form.leaders
+        (leaders_spaced if form.spaced else leaders_unspaced).update(form.leaders)
     # Words of CLDR phrases without slots ("now") trigger too.
     extra = {max(f.source.split(), key=len) for f in forms if f.fixed == () and f.reading == "NOW"}
     spaced = sorted({t for lex in lexicons.values() if lex.spaces for t in lex.triggers} | extra)
@@ -265,8 +291,9 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
         parts.append(trie_regex(unspaced))
     trigger = re.compile("|".join(parts))
     triggers = set(spaced) | set(unspaced)
-    leader_words = sorted(w for w in leaders if w not in triggers)
-    leader_rx = re.compile(rf"(?<!\w)(?:{trie_regex(leader_words) or '(?!)'})(?!\w)")
+    spaced_leaders = sorted(w for w in leaders_spaced if w not in triggers)
+    unspaced_leaders = sorted(w for w in leaders_unspaced if w not in triggers)
+    leader_rx = re.compile(_either(spaced_leaders, unspaced_leaders, r"(?<!\w){}(?!\w)", r"{}"))
     return Scanner(
         languages=languages,
         trigger=trigger,
