@@ -108,6 +108,9 @@ class LocaleFile(_Strict):
     relative_day: dict[str, tuple[str, ...]] = Field(default_factory=dict)
     day_period_phrases: dict[str, DayPeriodPhrase] = Field(default_factory=dict)
     weekend: WordList = WordList()
+    inflections: dict[Literal["month", "weekday"], dict[str, tuple[str, ...]]] = Field(
+        default_factory=dict
+    )
     to_date: dict[str, Literal["week", "month", "quarter", "year"]] = Field(default_factory=dict)
     connectives: dict[Literal[RELATIONS], tuple[str, ...]] = Field(default_factory=dict)  # type: ignore[valid-type]
     ambiguous: WordList = WordList()
@@ -126,6 +129,20 @@ class LocaleFile(_Strict):
                 raise ValueError(f"key {key!r} must be a day offset such as \"-2\"") from None
         return value
 
+    @field_validator("inflections")
+    @classmethod
+    def _inflection_keys(cls, value: dict[str, dict[str, tuple[str, ...]]]) -> dict:
+        for kind, table in value.items():
+            top = 12 if kind == "month" else 6
+            low = 1 if kind == "month" else 0
+            for key in table:
+                if not key.isdigit() or not low <= int(key) <= top:
+                    raise ValueError(
+                        f"[inflections.{kind}] key {key!r} must be a number from {low} to {top}"
+                        + (" (0 = Monday)" if kind == "weekday" else "")
+                    )
+        return value
+
     @field_validator("forms")
     @classmethod
     def _readings(cls, value: dict[str, tuple[str, ...]]) -> dict[str, tuple[str, ...]]:
@@ -141,6 +158,7 @@ class LocaleData:
     __slots__ = ("code", "meta", "chain", "_file", "numbers", "ordinals", "ordinal_suffixes",
                  "units", "direction", "relative_day", "day_period_phrases", "weekend",
                  "to_date", "connectives", "ambiguous", "not_temporal", "quiet", "forms", "root_forms",
+                 "inflections",
                  "examples")
 
     def __init__(self, code: str, chain: tuple[str, ...], files: list[LocaleFile]) -> None:
@@ -172,6 +190,7 @@ class LocaleData:
         self.day_period_phrases = merged("day_period_phrases")
         self.weekend = words("weekend")
         self.to_date = merged("to_date")
+        self.inflections = merged("inflections")
         self.connectives = merged("connectives")
         self.ambiguous = words("ambiguous")
         self.not_temporal = words("not_temporal")

@@ -145,6 +145,14 @@ def lexicon(lang: str) -> Lexicon:
             last = field.text.lower().split()[-1] if field.text.split() else ""
             if last.endswith(".") and collapse(last) not in words.get("weekday", {}):
                 put("weekday_abbr", last, cldr.WEEKDAY_FIELDS.index(field.field))
+    # Inflected forms CLDR does not list (Russian prepositional "в марте", accusative "в среду").
+    for number, forms in data.inflections.get("month", {}).items():
+        for form in forms:
+            put("month", form, int(number))
+            put("month_wide", form, int(number))
+    for number, forms in data.inflections.get("weekday", {}).items():
+        for form in forms:
+            put("weekday", form, int(number))
     for field in cldr.relative_fields(lang):
         if field.field == "day":
             put("relday", field.text, field.offset)
