@@ -295,7 +295,7 @@ def locale_id(value: str) -> str:
     >>> locale_id("en-gb")
     'en_GB'
     """
-    from .errors import ContextError, suggest
+    from .errors import ContextError, closest
 
     text = value.strip().replace("-", "_")
     parts = text.split("_")
@@ -313,9 +313,10 @@ def locale_id(value: str) -> str:
     try:
         loc = _locale(norm)
     except Exception:
+        near = closest(norm, all_locale_ids())
         raise ContextError(
-            f"locale={value!r} is not a CLDR locale{suggest(norm, all_locale_ids())}; "
-            "expected e.g. 'en', 'en_US' or 'de_AT'"
+            f"locale={value!r} is not a CLDR locale; expected e.g. 'en', 'en_US' or 'de_AT'"
+            + (f"; did you mean {near!r}?" if near else "")
         ) from None
     return str(loc)
 

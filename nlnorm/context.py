@@ -13,7 +13,7 @@ from zoneinfo import ZoneInfo, ZoneInfoNotFoundError
 
 from pydantic import BaseModel, ConfigDict, Field, field_validator, model_validator
 
-from .errors import ContextError, suggest
+from .errors import ContextError, closest, suggest
 
 __all__ = ["Context", "WEEKDAYS", "zone"]
 
@@ -51,8 +51,14 @@ def _suggest_zone(name: str) -> str:
     if close:
         return close
     city = name.strip().replace(" ", "_").lower()
-    same = sorted(z for z in _all_zones() if "/" in z and z.rsplit("/", 1)[1].lower() == city)
-    return f"; did you mean {same[0]!r}?" if same else ""
+    cities: dict[str, str] = {}
+    for z in sorted(_all_zones()):
+        if "/" in z and not z.startswith(("Etc/", "SystemV/")):
+            cities.setdefault(z.rsplit("/", 1)[1].lower(), z)
+    if city in cities:
+        return f"; did you mean {cities[city]!r}?"
+    near = closest(city, cities)
+    return f"; did you mean {cities[near]!r}?" if near else ""
 
 
 def _parse_now(value: Any) -> datetime:
@@ -274,7 +280,8 @@ def _explain(exc: Any) -> str:
         msg = err.get("msg", "invalid")
         if msg.startswith("Value error, "):
             msg = msg[len("Value error, ") :]
-        if loc == "context" or msg.startswith(f"{loc}="):
+        # Messages that already name what was wrong ("language 'xx' is ...") stand alone.
+        if loc == "context" or msg.startswith((f"{loc}=", "language ")):
             parts.append(msg)
         else:
             value = err.get("input")

@@ -17,6 +17,7 @@ __all__ = [
     "LocaleError",
     "InputError",
     "suggest",
+    "closest",
 ]
 
 
@@ -36,11 +37,21 @@ class InputError(NlnormError, ValueError):
     """A question or batch line is malformed (not JSON, no text, wrong type)."""
 
 
+def closest(value: str, known: Iterable[str]) -> str | None:
+    """The known value closest to ``value``, if one is close enough.
+
+    >>> closest("Europe/Berln", ["Europe/Berlin", "Europe/Bern"])
+    'Europe/Berlin'
+    """
+    close = difflib.get_close_matches(value, list(known), n=1, cutoff=0.75)
+    return close[0] if close else None
+
+
 def suggest(value: str, known: Iterable[str]) -> str:
     """Return ``"; did you mean 'x'?"`` for the closest known value, or ``""``.
 
     >>> suggest("Europe/Berln", ["Europe/Berlin", "Europe/Bern"])
     "; did you mean 'Europe/Berlin'?"
     """
-    close = difflib.get_close_matches(value, list(known), n=1, cutoff=0.75)
-    return f"; did you mean {close[0]!r}?" if close else ""
+    close = closest(value, known)
+    return f"; did you mean {close!r}?" if close else ""
