@@ -126,40 +126,33 @@ def _runs2(sample: str) -> tuple[str, ...]:
     return tuple(f"#{min(len(r), 4)}" if r[0].isdigit() else r for r in runs)
 
 
+@functools.lru_cache(maxsize=4096)
+def _token_runs(samples: tuple[str, ...]) -> frozenset[tuple[str, ...]]:
+    return frozenset(r for s in samples if (r := _runs2(s)))
+
+
 def _sample_keys(token_samples: list[tuple[list[str], bool]]) -> set[tuple[str, str]] | None:
     """Every (first run, second run) a form can start with, from sample texts of its tokens
     (tokens are separated by white space, so runs never cross a token boundary); a second run
     of ``""`` means the form may end after one run."""
-    tokens = [({r for s in samples if (r := _runs2(s))}, optional)
-              for samples, optional in token_samples]
-
-    @functools.cache
-    def firsts(i: int) -> frozenset[str]:
-        if i == len(tokens):
-            return frozenset({""})
-        runs, optional = tokens[i]
-        out = {r[0] for r in runs}
-        if optional:
-            out |= firsts(i + 1)
-        return frozenset(out)
-
-    @functools.cache
-    def pairs(i: int) -> frozenset[tuple[str, str]]:
-        if i == len(tokens):
-            return frozenset()
-        runs, optional = tokens[i]
-        out: set[tuple[str, str]] = set()
+    tokens = [(_token_runs(tuple(samples)), optional) for samples, optional in token_samples]
+    # Walk from the last token back: firsts = runs a suffix can start with, pairs = its keys.
+    firsts: frozenset[str] = frozenset({""})
+    pairs: set[tuple[str, str]] = set()
+    for runs, optional in reversed(tokens):
+        new_pairs: set[tuple[str, str]] = set()
+        new_firsts: set[str] = set()
         for r in runs:
+            new_firsts.add(r[0])
             if len(r) >= 2:
-                out.add((r[0], r[1]))
+                new_pairs.add((r[0], r[1]))
             else:
-                out.update((r[0], f) for f in firsts(i + 1))
+                new_pairs.update((r[0], f) for f in firsts)
         if optional:
-            out |= pairs(i + 1)
-        return frozenset(out)
-
-    found = set(pairs(0))
-    return found if len(found) <= _MAX_SAMPLES else None
+            new_pairs |= pairs
+            new_firsts |= firsts
+        pairs, firsts = new_pairs, frozenset(new_firsts)
+    return pairs if len(pairs) <= _MAX_SAMPLES else None
 
 
 def key_of(text: str) -> str:
