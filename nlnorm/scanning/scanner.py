@@ -18,7 +18,7 @@ from typing import Mapping
 
 from .. import cldr
 from ..locale import load_locale
-from .forms import Form, compile_form
+from .forms import Form, compile_form, key_of
 from ..locale import POST_RELATIONS
 from .lexicon import Lexicon, lexicon, trie_regex
 
@@ -75,13 +75,20 @@ class Scanner:
     trigger: re.Pattern[str]
     leaders: re.Pattern[str]
     curated: Mapping[object, tuple[Form, ...]]
-    generated: Mapping[object, tuple[Form, ...]]
+    generated: Mapping[object, tuple["Pending", ...]]  # by first run only; compiled on use
     lexicons: Mapping[str, Lexicon]
     connectives: Connectives
-    forms: tuple[Form, ...]
+    curated_forms: tuple[Form, ...]
+    pending: tuple["Pending", ...]
     _cache: dict[object, tuple[Bucket, ...]]
+    _compiled: dict[int, Form]  # CLDR-generated forms compiled so far, by order
     unspaced: bool = False  # some language is written without spaces: try per-character buckets
     lookback: int = 48  # characters before a trigger in which leading words are tried
+
+    @property
+    def forms(self) -> tuple[Form, ...]:
+        """Every form, the CLDR-generated ones compiled now (for tests and tools)."""
+        return self.curated_forms + tuple(p.form(self.lexicons, self._compiled) for p in self.pending)
 
     def buckets(self, key: object) -> tuple[Bucket, ...]:
         found = self._cache.get(key)
@@ -92,7 +99,7 @@ class Scanner:
 
     def _build(self, key: object) -> tuple[Bucket, ...]:
         curated = list(self.curated.get(key, ()))
-        generated = list(self.generated.get(key, ()))
+        generated = self._generated(key)
         if curated and generated:
             first = _bucket(curated)
             generated = [f for f in generated if not _covered(f, first)]
@@ -100,6 +107,71 @@ class Scanner:
                 return (first,)
         forms = curated + generated
         return (_bucket(forms),) if forms else ()
+
+
+    def _generated(self, key: object) -> list[Form]:
+        """The CLDR-generated forms that can start with ``key``, compiled now."""
+        if isinstance(key, tuple):
+            first = key[0]
+            pending = self.generated.get(first, ())
+        else:
+            pending = self.generated.get(key, ())
+        out = []
+        for p in pending:
+            form = p.form(self.lexicons, self._compiled)
+            if isinstance(key, tuple):
+                pairs = form.pair_keys
+                if pairs is None:
+                    pairs = frozenset((k, "") for k in form.first_keys)
+                if key not in pairs:
+                    continue
+            out.append(form)
+        return out
+
+
+@dataclass(frozen=True, slots=True)
+class Pending:
+    """A CLDR-generated form not compiled yet (most are never needed in one run)."""
+
+    lang: str
+    source: str
+    reading: str
+    fixed: tuple[tuple[str, object], ...]
+    order: int
+
+    def form(self, lexicons: Mapping[str, Lexicon], cache: dict[int, Form] | None = None) -> Form:
+        found = cache.get(self.order) if cache is not None else None
+        if found is None:
+            found = compile_form(self.source, lexicons[self.lang], self.reading, self.order,
+                                 self.fixed, where=f"CLDR {self.lang}")
+            if cache is not None:
+                cache[self.order] = found
+        return found
+
+
+def _cheap_first(source: str, lex: Lexicon) -> set[str]:
+    """Bucket keys (first runs, or ``c:`` characters) a CLDR phrase can start with, read off
+    its text without compiling it."""
+    text = source.strip()
+    if lex.spaces:
+        if text.startswith("{num}"):
+            return {"#1", "#2", "#3"} | {key_of(w) for w in lex.words.get("num", {})}
+        return {key_of(text)}
+    if text.startswith("{num}"):
+        return {"c:" + d for d in "0123456789"} | {"c:" + w[0] for w in lex.words.get("num", {}) if w}
+    return {"c:" + text[0]}
+
+
+def _cheap_trigger(source: str, spaced: bool) -> str:
+    """The word of a CLDR phrase that triggers the scanner: its last literal word ("last yr."
+    -> "yr", "{0} days ago" -> "ago"), or its longest literal run without spaces ("{0}天前")."""
+    parts = [p for p in re.split(r"\{num\}", source) if p.strip()]
+    if not parts:
+        return ""
+    if spaced:
+        words = [w.strip(".,") for w in " ".join(parts).split() if w.strip(".,")]
+        return words[-1] if words else ""
+    return max((p.strip() for p in parts), key=len)
 
 
 def _covered(form: Form, curated: Bucket) -> bool:
@@ -234,6 +306,7 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
     """The scanner of ``languages`` (built once per tuple and cached)."""
     lexicons = {lang: lexicon(lang) for lang in languages}
     forms: list[Form] = []
+    pending: list[Pending] = []
     order = 0
     root_done = False
     for lang in languages:
@@ -245,7 +318,7 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
                 forms.append(compile_form(source, lex, reading, order, where=f"{where} {reading}"))
                 order += 1
         for source, reading, fixed in cldr_forms(lang):
-            forms.append(compile_form(source, lex, reading, order, fixed, where=f"CLDR {lang}"))
+            pending.append(Pending(lang, source, reading, fixed, order))
             order += 1
         if not root_done:
             root_done = True
@@ -259,11 +332,22 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
                     forms.append(compile_form(source, root_lex, reading, order, where="locales/root.toml"))
                     order += 1
     curated: dict[object, list[Form]] = defaultdict(list)
-    generated: dict[object, list[Form]] = defaultdict(list)
+    generated: dict[object, list[Pending]] = defaultdict(list)
     leaders_spaced: set[str] = set()
     leaders_unspaced: set[str] = set()
+    cldr_triggers: dict[bool, set[str]] = {True: set(), False: set()}
+    for p in pending:
+        lex = lexicons[p.lang]
+        for key in _cheap_first(p.source, lex):
+            generated[key].append(p)
+        first = p.source.split()[0] if p.source.split() else ""
+        if lex.spaces and re.fullmatch(r"\w+", first):
+            leaders_spaced.add(first)
+        trigger_word = _cheap_trigger(p.source, lex.spaces)
+        if trigger_word:
+            cldr_triggers[lex.spaces].add(trigger_word)
     for form in forms:
-        target = generated if form.fixed else curated
+        target = curated
         if form.spaced:
             pairs = form.pair_keys
             if pairs is None:  # too many combinations to list: bucket by the first run only
@@ -276,10 +360,12 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
         (leaders_spaced if form.spaced else leaders_unspaced).update(form.leaders)
     # Words of CLDR phrases without slots ("now") trigger too.
     extra = {max(f.source.split(), key=len) for f in forms if f.fixed == () and f.reading == "NOW"}
-    spaced = sorted({t for lex in lexicons.values() if lex.spaces for t in lex.triggers} | extra)
+    spaced = sorted({t for lex in lexicons.values() if lex.spaces for t in lex.triggers} | extra
+                    | cldr_triggers[True])
     quiet = {w for lang in languages for w in load_locale(lang).quiet}
     spaced = [t for t in spaced if t not in quiet]
-    unspaced = sorted({t for lex in lexicons.values() if not lex.spaces for t in lex.triggers})
+    unspaced = sorted({t for lex in lexicons.values() if not lex.spaces for t in lex.triggers}
+                      | cldr_triggers[False])
     # A digit that does not continue a number ("2025.1" triggers once); written with the
     # look-behind after the digit so that the regex engine can skip ahead by character class.
     # Digits after a letter and a hyphen are a ticket key ("WRN-2025"), common practice in
@@ -302,7 +388,9 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
         generated=MappingProxyType({k: tuple(v) for k, v in generated.items()}),
         lexicons=MappingProxyType(lexicons),
         connectives=_connectives(languages),
-        forms=tuple(forms),
+        curated_forms=tuple(forms),
+        pending=tuple(pending),
         _cache={},
+        _compiled={},
         unspaced=any(not lex.spaces for lex in lexicons.values()),
     )
