@@ -66,6 +66,7 @@ class Meta(_Strict):
     case_marks_names: bool = False
     weekday_reading: Literal["nearest", "week"] = "nearest"
     particles: tuple[str, ...] = ()  # case endings glued to a phrase ("지난주에", "haftaki")
+    carrier: str = ""  # a short question with {} where a time phrase goes (conformance tests)
     sources: tuple[str, ...] = ()
 
 
@@ -83,6 +84,7 @@ class Example(_Strict):
     locale: str | None = None
     week_start: str | None = None
     none: bool = False  # true: the text must give no temporal mention
+    same_as: str | None = None  # an English phrase meaning the same (checked at random clocks)
 
 
 class WordList(_Strict):

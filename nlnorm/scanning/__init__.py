@@ -45,7 +45,7 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     positions = set(hits)
     for hit in hits:
         k = hit
-        while k > 0 and text[k - 1].isalnum():
+        while k > 0 and text[k - 1].isascii() and text[k - 1].isalnum():
             k -= 1
         positions.add(k)
     leaders = [m.start() for m in scanner.leaders.finditer(text)]
