@@ -31,7 +31,8 @@ def _context_options(p: argparse.ArgumentParser, demo: bool = False) -> None:
     g.add_argument("--week-start", choices=("monday", "sunday", "saturday"),
                    help="first day of the week (default: from the locale's CLDR week data)")
     g.add_argument("--locale", help="CLDR locale, e.g. en_US or en_GB (default: en)")
-    g.add_argument("--lang", help="comma-separated languages to look for (default: en)")
+    g.add_argument("--lang", help="comma-separated languages to look for: deep ones, 'all', or any CLDR "
+                   "locale such as sw or es_MX (default: all deep languages)")
     g.add_argument("--bias", choices=("past", "future"),
                    help="which occurrence a date without year means (default: past)")
     g.add_argument("--window-reading", choices=("rolling", "calendar"),

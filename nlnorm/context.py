@@ -99,7 +99,9 @@ class Context(BaseModel):
             locale's territory (babel), else Monday as in ISO 8601.
         locale: CLDR locale id (``en``, ``en_US``, ``de_AT``); input like ``en-us`` is accepted.
             It decides week start, weekend days and numeric date order.
-        languages: languages whose phrases are looked for.
+        languages: languages whose phrases are looked for: deep languages (a file in
+            locales/) and any other CLDR locale ("sw", "es_MX"), read from CLDR data alone.
+            Default: every deep language at once, English first.
         bias: ``past`` (default) or ``future``: which occurrence an underspecified date such as
             "March" or "week 48" means (R12).
         window_reading: ``rolling`` (default) or ``calendar``: whether "the past 2 weeks" is the
@@ -120,7 +122,7 @@ class Context(BaseModel):
     tz: str = ""
     week_start: WeekStart | None = None
     locale: str = "en"
-    languages: tuple[str, ...] = ("en",)
+    languages: tuple[str, ...] = Field(default_factory=lambda: _deep())
     bias: Literal["past", "future"] = "past"
     window_reading: Literal["rolling", "calendar"] = "rolling"
     weekday_reading: Literal["nearest", "week"] | None = None
@@ -186,8 +188,10 @@ class Context(BaseModel):
     @field_validator("languages", mode="before")
     @classmethod
     def _v_languages(cls, value: Any) -> tuple[str, ...]:
-        from .locale import available_languages
+        from .locale import available_languages, cldr_tier_code, deep_languages
 
+        if value is None or value == "" or value == "all":
+            return deep_languages()
         if isinstance(value, str):
             value = [part for part in value.replace(";", ",").split(",")]
         if not isinstance(value, (list, tuple)) or not value:
@@ -195,14 +199,27 @@ class Context(BaseModel):
         known = available_languages()
         out: list[str] = []
         for item in value:
-            code = str(item).strip().replace("-", "_").lower()
-            if code not in known:
-                raise ContextError(
-                    f"language {item!r} is not available{suggest(code, known)} "
-                    f"(known: {', '.join(sorted(known))})"
-                )
-            if code not in out:
-                out.append(code)
+            text = str(item).strip()
+            code = text.replace("-", "_").lower()
+            if code in known:
+                found = code
+            elif text == "all":
+                out.extend(c for c in deep_languages() if c not in out)
+                continue
+            else:
+                tier = cldr_tier_code(text)
+                if tier is None:
+                    raise ContextError(
+                        f"language {item!r} is not available{suggest(code, known)} "
+                        f"(deep languages: {', '.join(sorted(known))}; or any CLDR locale "
+                        "such as 'sw' or 'es_MX')"
+                    )
+                base = tier.split("_")[0]
+                # A deep language is read from its file whatever the region ("eng", "de_AT"
+                # -> "de"); the region's conventions come from the context's locale.
+                found = base if base in known else tier
+            if found not in out:
+                out.append(found)
         return tuple(out)
 
     @model_validator(mode="after")
@@ -271,6 +288,12 @@ class Context(BaseModel):
             del data["week_start"]
         data.update(changes)
         return Context.model_validate(data)
+
+
+def _deep() -> tuple[str, ...]:
+    from .locale import deep_languages
+
+    return deep_languages()
 
 
 def _explain(exc: Any) -> str:

@@ -18,7 +18,8 @@ from pydantic import BaseModel, ConfigDict, Field, ValidationError, field_valida
 
 from .errors import LocaleError, suggest
 
-__all__ = ["LocaleData", "load_locale", "available_languages", "locales_dir", "Example"]
+__all__ = ["LocaleData", "load_locale", "available_languages", "locales_dir", "Example",
+           "cldr_tier_code", "deep_languages"]
 
 RELATIONS = (
     "since",
@@ -228,6 +229,40 @@ def _read(path: Path) -> LocaleFile:
         raise LocaleError(f"{rel} {where}: {err['msg'].lower()}, got {got!r}") from None
 
 
+def _cldr_only(code: str) -> LocaleFile | None:
+    """The locale file of a language nlnorm has no file for: CLDR data alone (the CLDR tier).
+
+    Its phrases are CLDR's relative date fields and past/future patterns; its parent is the
+    file of its base language when there is one ("de_AT" -> "de"), else root. Whether the
+    language writes spaces between words is read off CLDR: a language whose relative phrases
+    ("上周", "สัปดาห์ที่แล้ว") hold no space is scanned without word boundaries.
+    """
+    from . import cldr
+
+    try:
+        locale = cldr.locale_id(code)
+    except Exception:
+        return None
+    base = locale.split("_")[0]
+    parent = base if base != locale and (locales_dir() / f"{base}.toml").is_file() else "root"
+    phrases = [f.text for f in cldr.relative_fields(locale) if len(f.text) > 2]
+    spaces = not phrases or any(" " in p for p in phrases)
+    if parent != "root":
+        spaces = _read(locales_dir() / f"{parent}.toml").meta.spaces
+    return LocaleFile(meta=Meta(name=f"{locale} (CLDR data only)", parent=parent, spaces=spaces,
+                                sources=(f"Unicode CLDR {cldr.cldr_version()} via babel",)))
+
+
+def cldr_tier_code(value: str) -> str | None:
+    """The CLDR locale id of a language nlnorm reads from CLDR data alone, or ``None``."""
+    from . import cldr
+
+    try:
+        return cldr.locale_id(value)
+    except Exception:
+        return None
+
+
 @functools.cache
 def available_languages() -> frozenset[str]:
     """Codes of every locale file (``root`` and files starting with ``_`` excluded)."""
@@ -256,14 +291,24 @@ def load_locale(code: str) -> LocaleData:
         if current in chain:
             raise LocaleError(f"locales/{current}.toml: parent chain loops ({' -> '.join(chain)})")
         path = base / f"{current}.toml"
-        if not path.is_file():
-            known = available_languages()
-            raise LocaleError(
-                f"no locale data for {current!r}{suggest(current, known)} "
-                f"(known: {', '.join(sorted(known))})"
-            )
-        data = _read(path)
+        if path.is_file():
+            data = _read(path)
+        else:
+            data = _cldr_only(current)
+            if data is None:
+                known = available_languages()
+                raise LocaleError(
+                    f"no locale data for {current!r}{suggest(current, known)} "
+                    f"(deep languages: {', '.join(sorted(known))}; any CLDR locale such as "
+                    "'sw' or 'es_MX' works from CLDR data alone)"
+                )
         chain.append(current)
         files.append(data)
         current = data.meta.parent if current != "root" else ""
     return LocaleData(code, tuple(chain), files)
+
+
+def deep_languages() -> tuple[str, ...]:
+    """The languages with a locale file, English first: the default languages to look for."""
+    langs = sorted(available_languages())
+    return tuple(["en"] + [lang for lang in langs if lang != "en"]) if "en" in langs else tuple(langs)

@@ -211,14 +211,28 @@ def test_languages_as_a_string_or_a_list(given):
     assert at(languages=given).languages == ("en",)
 
 
-def test_the_default_language_is_english():
-    assert at().languages == ("en",)
+def test_the_default_languages_are_every_deep_language_english_first():
+    from nlnorm.locale import available_languages
+
+    langs = at().languages
+    assert langs[0] == "en" and set(langs) == set(available_languages())
+
+
+def test_an_iso_639_2_code_and_a_regional_locale_name_the_deep_language():
+    # CLDR via babel resolves "eng" to en_US; a deep language is read from its file whatever
+    # the region.
+    assert at(languages="eng").languages == ("en",)
+    assert at(languages=["en_GB", "en"]).languages == ("en",)
+
+
+def test_a_language_without_a_locale_file_is_read_from_cldr_alone():
+    assert at(languages=["sw", "es_MX"]).languages[0] == "sw"
 
 
 @pytest.mark.parametrize(("given", "fragment"), [
     ("xx", "language 'xx' is not available"),
     (["en", "xx"], "language 'xx' is not available"),
-    ("eng", "did you mean 'en'?"),
+    ("enn", "did you mean 'en'?"),
     ([], "must name at least one language"),
     (5, "must name at least one language"),
 ])

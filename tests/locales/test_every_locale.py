@@ -104,5 +104,5 @@ def test_a_form_with_an_unknown_slot_names_the_form():
 
 
 def test_unknown_language_lists_the_known_ones():
-    with pytest.raises(LocaleError, match="known: .*en"):
+    with pytest.raises(LocaleError, match="deep languages: .*en"):
         load_locale("xx")
