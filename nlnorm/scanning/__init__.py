@@ -48,6 +48,16 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
         while k > 0 and text[k - 1].isascii() and text[k - 1].isalnum():
             k -= 1
         positions.add(k)
+        # A sign before a number starts a form: CLDR's narrow patterns ("-3 a", "+2 j").
+        if k > 0 and text[k - 1] in "+-" and text[k].isdigit() and (
+                k == 1 or not text[k - 2].isalnum()):
+            positions.add(k - 1)
+        # An elided word glued to it by an apostrophe starts a form too ("l'année", "dell'anno").
+        if k > 1 and text[k - 1] == "'" and text[k - 2].isalpha():
+            k -= 1
+            while k > 0 and text[k - 1].isalpha():
+                k -= 1
+            positions.add(k)
     leaders = [m.start() for m in scanner.leaders.finditer(text)]
     if leaders:
         back = scanner.lookback
