@@ -17,6 +17,7 @@ from typing import Any, Literal, Mapping
 from pydantic import BaseModel, ConfigDict, Field, ValidationError, field_validator
 
 from .errors import LocaleError, suggest
+from .preparing import fold
 
 __all__ = ["LocaleData", "load_locale", "available_languages", "locales_dir", "Example",
            "cldr_tier_code", "deep_languages"]
@@ -40,10 +41,13 @@ RELATIONS = (
     "after_post",
     "before_post",
     "until_post",
+    "between_post",
+    "due_post",
     "deadline",
 )
 #: Relations of words that follow the phrase they bind (postpositions, "onwards").
-POST_RELATIONS = frozenset({"since_suffix", "from_suffix", "since_post", "after_post", "before_post", "until_post"})
+POST_RELATIONS = frozenset({"since_suffix", "from_suffix", "since_post", "after_post", "before_post", "until_post",
+                            "between_post", "due_post"})
 
 
 def locales_dir() -> Path:
@@ -150,8 +154,10 @@ class LocaleFile(_Strict):
     @classmethod
     def _readings(cls, value: dict[str, tuple[str, ...]]) -> dict[str, tuple[str, ...]]:
         for key in value:
-            if not (key.startswith("R") and key[1:].isdigit()) and key not in ("D",):
-                raise ValueError(f"form key {key!r} must be a reading id such as 'R2'")
+            # "N": forms of phrases that hold a time word but are no time phrase ("guten
+            # Morgen"); they give no mention and keep shorter forms from matching inside them.
+            if not (key.startswith("R") and key[1:].isdigit()) and key not in ("D", "N"):
+                raise ValueError(f"form key {key!r} must be a reading id such as 'R2' (or 'N')")
         return value
 
 
@@ -179,7 +185,7 @@ class LocaleData:
         def words(attr: str) -> frozenset[str]:
             out: set[str] = set()
             for f in files:
-                out.update(w.lower() for w in getattr(f, attr).words)
+                out.update(fold(w) for w in getattr(f, attr).words)
             return frozenset(out)
 
         self.numbers = merged("numbers")

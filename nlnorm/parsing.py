@@ -179,7 +179,9 @@ def _parse_date(c: Candidate, ctx: "Context") -> DateRef | None:
     slot = c.slot
     numdate = slot("numdate")
     if numdate is not None:
-        order = ctx.date_order or _order_for(c.lang, ctx.locale)
+        # A numeric date has no language: it is read in the order of the context's locale
+        # (CLDR short date format), whichever language's form matched it.
+        order = ctx.date_order or cldr.date_order(ctx.locale)
         first, other = numeric_date(str(numdate), order)
         if first is None:
             return None
@@ -241,12 +243,3 @@ def _has_week_53(year: int) -> bool:
     from datetime import date
 
     return date(year, 12, 28).isocalendar()[1] == 53
-
-
-def _order_for(lang: str, locale: str) -> str:
-    if locale.split("_")[0] == lang or lang == "und":
-        return cldr.date_order(locale)
-    try:
-        return cldr.date_order(lang)
-    except Exception:
-        return "YMD"

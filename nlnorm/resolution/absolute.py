@@ -10,7 +10,7 @@ from typing import TYPE_CHECKING
 from ..calendars import add_months, day_span, iso_week_start
 from ..locale import load_locale
 from ..model import DateRef, Grain, Interval, Reading, WeekdayRef
-from ..parsing import _order_for
+from .. import cldr
 from .common import Outcome, WEEKDAY_NAMES, dates, reading
 
 if TYPE_CHECKING:
@@ -102,7 +102,7 @@ def date_ref(ref: DateRef, ctx: "Context", rid: str, lang: str = "en") -> Outcom
         alts: tuple[Reading, ...] = ()
         if ref.order is not None:
             source = "date_order" if ctx.date_order else f"CLDR short date format of {ctx.locale}"
-            preferred = ctx.date_order or _order_for(lang, ctx.locale)
+            preferred = ctx.date_order or cldr.date_order(ctx.locale)
             if ref.order == preferred:
                 note = f"numeric date read {_ORDER_NAMES[ref.order]} ({source})"
             else:

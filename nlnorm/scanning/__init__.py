@@ -10,7 +10,7 @@ from ..model import Candidate, Span
 from ..preparing import Prepared
 from .combine import combine
 from .forms import CANONICAL_SLOT
-from .lexicon import REGEX_CLASSES
+from .lexicon import REGEX_CLASSES, is_word_char
 from .scanner import Scanner, scanner_for
 
 if TYPE_CHECKING:
@@ -77,7 +77,7 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
         if pos < limit:
             continue
         keys: list[object] = []
-        if not pos or not (text[pos - 1].isalnum() or text[pos - 1] == "_"):
+        if not pos or not is_word_char(text[pos - 1]):
             m0 = pair(text, pos)
             if m0 is not None:
                 first, second = m0.group(1), m0.group(2) or ""
@@ -112,6 +112,8 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
         m, form = best
         found.append(_candidate(m, form, scanner, prepared))
         limit = best_end
+    # Matches of "N" forms only kept shorter forms from matching inside them.
+    found = [c for c in found if c.reading != "N"]
     if not found:
         return ()
     return combine(prepared, found, scanner)

@@ -8,6 +8,8 @@ A form is a phrase pattern written with spaces between tokens::
 - ``(a|b)`` is one of several literal words;
 - a trailing ``?`` makes the token optional; a leading ``~`` marks the whole form as weak
   (it becomes a mention only with a cue such as a connective);
+- ``{slot=value}`` matches no text and gives the slot a fixed value ("上月{unit=month}");
+  a value that is a whole number is read as one;
 - anything else is literal text. Between tokens goes white space (``\\s+``), or optional
   white space in languages written without spaces.
 
@@ -23,11 +25,14 @@ import re
 from dataclasses import dataclass
 
 from ..errors import LocaleError
-from .lexicon import REGEX_CLASSES, TRIGGER_CLASSES, Lexicon, trie_regex
+from ..preparing import fold
+from .lexicon import NO_WORD_AFTER, NO_WORD_BEFORE, REGEX_CLASSES, TRIGGER_CLASSES, Lexicon, trie_regex
 
 __all__ = ["Form", "compile_form", "CANONICAL_SLOT"]
 
-_TOKEN_PIECE = re.compile(r"\{([a-z_0-9]+)\}|([^{}]+)")
+_TOKEN_PIECE = re.compile(r"\{([a-z_0-9]+)\}|\(([^(){}]*\|[^(){}]*)\)|([^{}]+?)(?=\{|\([^(){}]*\|[^(){}]*\)|$)")
+#: A fixed-value piece ``{unit=month}`` matches no text and gives its slot that value.
+_FIXED_PIECE = re.compile(r"\{([a-z_0-9]+)=([^{}=\s]+)\}")
 _DIGITS = frozenset("0123456789")
 
 #: Slot classes that share one slot name in the candidate (``month_wide`` is still a month).
@@ -76,7 +81,7 @@ class Form:
     def regex(self) -> re.Pattern[str]:
         """This form alone, compiled (cached), with the word boundary before it; the scanner
         uses combined expressions."""
-        prefix = r"(?<!\w)" if self.spaced else ""
+        prefix = NO_WORD_BEFORE if self.spaced else ""
         return _compiled(prefix + self.pattern)
 
 
@@ -228,6 +233,11 @@ def compile_form(
     weak = text.startswith("~")
     if weak:
         text = text[1:].strip()
+    given = tuple((name, int(value) if re.fullmatch(r"-?\d+", value) else value)
+                  for name, value in _FIXED_PIECE.findall(text))
+    if given:
+        fixed = tuple(fixed) + given
+        text = _FIXED_PIECE.sub("", text)
     tokens = text.split()
     if not tokens:
         raise LocaleError(f"{where}: empty form {source!r}")
@@ -237,13 +247,14 @@ def compile_form(
     slots: list[tuple[str, str]] = []
     token_samples: list[tuple[list[str], bool]] = []
     weight = 0  # how specific the form is: tokens plus the slots and literals inside them
+    bare = True
     for token in tokens:
         optional = token.endswith("?") and len(token) > 1
         body = token[:-1] if optional else token
         leaders: set[str] = set()
         keys: set[str] = set()
         if body.startswith("(") and body.endswith(")") and "{" not in body:
-            options = [o.lower() for o in body[1:-1].split("|") if o]
+            options = [fold(o) for o in body[1:-1].split("|") if o]
             rx = "(?:" + "|".join(re.escape(o) for o in sorted(options, key=len, reverse=True)) + ")"
             firsts = {o[0] for o in options}
             leaders = {o for o in options if o[0].isalpha()}
@@ -254,11 +265,21 @@ def compile_form(
             parts: list[str] = []
             firsts = set()
             samples = [""]
+            bare = True  # the token is one slot and nothing else
             for m in _TOKEN_PIECE.finditer(body):
                 weight += 1
-                cls, literal = m.group(1), m.group(2)
+                cls, choice, literal = m.group(1), m.group(2), m.group(3)
                 first_piece = not parts
-                if cls:
+                if choice is not None:
+                    # Options inside a token: "{year}'(te|de|ta|da)".
+                    options = [fold(o) for o in choice.split("|") if o]
+                    samples = [a + o for a in samples for o in options][:_MAX_SAMPLES]
+                    parts.append("(?:" + "|".join(re.escape(o) for o in sorted(options, key=len, reverse=True)) + ")")
+                    bare = False
+                    if first_piece:
+                        firsts |= {o[0] for o in options}
+                        keys |= {key_of(o) for o in options}
+                elif cls:
                     if cls not in lex.regex:
                         known = ", ".join(sorted(set(lex.regex)))
                         raise LocaleError(
@@ -275,7 +296,8 @@ def compile_form(
                         keys |= info.keys
                         leaders |= info.leaders
                 else:
-                    lowered = literal.lower()
+                    bare = False
+                    lowered = fold(literal)
                     samples = [a + lowered for a in samples]
                     parts.append(re.escape(lowered))
                     if first_piece:
@@ -313,11 +335,12 @@ def compile_form(
         # Languages that glue endings and postpositions to words ("지난주에", "지난주부터").
         ends = f"(?:{trie_regex(lex.particles)})?" if lex.particles else ""
         glue = f"(?={trie_regex(lex.glue)})|" if lex.glue else ""
-        regex = rf"(?:{regex}){ends}(?:{glue}(?!\w))"
+        regex = rf"(?:{regex}){ends}(?:{glue}{NO_WORD_AFTER})"
     elif lex.spaces:
-        regex = rf"(?:{regex})(?!\w)"
+        regex = rf"(?:{regex}){NO_WORD_AFTER}"
     regex += f"(?P<f{order}_e>)"
-    single = slots[0][1] if len(tokens) == 1 and len(slots) == 1 and not fixed else None
+    # A bare word: one token that is one slot ("{month}", not "{year}'te" or "{month} ayı").
+    single = slots[0][1] if len(tokens) == 1 and len(slots) == 1 and not fixed and bare else None
     pair_keys = _sample_keys(token_samples) if lex.spaces else None
     return Form(
         lang=lex.lang,

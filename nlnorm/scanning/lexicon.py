@@ -14,6 +14,7 @@ from typing import Mapping
 
 from .. import cldr
 from ..locale import POST_RELATIONS, load_locale
+from ..preparing import fold
 
 __all__ = ["Lexicon", "lexicon", "trie_regex", "REGEX_CLASSES", "collapse"]
 
@@ -43,10 +44,33 @@ TRIGGER_CLASSES = (
 
 _SPACES = re.compile(r"\s+")
 
+#: Characters that continue a word although ``\w`` does not match them: combining marks of
+#: Latin, Cyrillic, Hebrew, Arabic, the Indic and Southeast Asian scripts, Adlam and Chakma
+#: (vowel signs such as Gujarati "ા" are marks, not letters).
+_WORD_MARKS = (
+    "\u0300-\u036f\u0483-\u0489\u0591-\u05c7\u0610-\u061a\u064b-\u065f\u0670"
+    "\u06d6-\u06ed\u0900-\u0dff\u0e00-\u0eff\u0f00-\u0fff\u1000-\u109f\u1780-\u17ff"
+    "\u1ab0-\u1aff\u1dc0-\u1dff\u20d0-\u20ff\ufe20-\ufe2f"
+    "\U00011100-\U0001114f\U0001e900-\U0001e95f"
+)
+#: A character inside a word, for word boundaries in every script.
+WORD = f"[\\w{_WORD_MARKS}]"
+#: Look-arounds: no word character before / after this point.
+NO_WORD_BEFORE = f"(?<!{WORD})"
+NO_WORD_AFTER = f"(?!{WORD})"
+
+
+def is_word_char(ch: str) -> bool:
+    """Whether ``ch`` continues a word (a letter, digit, underscore or combining mark)."""
+    return ch.isalnum() or ch == "_" or _MARK.match(ch) is not None
+
+
+_MARK = re.compile(f"[{_WORD_MARKS}]")
+
 
 def collapse(text: str) -> str:
-    """Lower-case ``text`` with runs of white space folded to one space."""
-    return _SPACES.sub(" ", text.strip().lower())
+    """``text`` normalized as questions are (see ``preparing.fold``), white space folded."""
+    return _SPACES.sub(" ", fold(text.strip()))
 
 
 def trie_regex(words: list[str] | tuple[str, ...] | frozenset[str], spaces: str = r"\s+") -> str:
@@ -142,7 +166,7 @@ def lexicon(lang: str) -> Lexicon:
     # weekday names of the same locale may not have: the dotted word is an abbreviation too.
     for field in cldr.relative_fields(lang):
         if field.field in cldr.WEEKDAY_FIELDS and field.width == "short":
-            last = field.text.lower().split()[-1] if field.text.split() else ""
+            last = fold(field.text).split()[-1] if field.text.split() else ""
             if last.endswith(".") and collapse(last) not in words.get("weekday", {}):
                 put("weekday_abbr", last, cldr.WEEKDAY_FIELDS.index(field.field))
     # Inflected forms CLDR does not list (Russian prepositional "в марте", accusative "в среду").
@@ -175,7 +199,7 @@ def lexicon(lang: str) -> Lexicon:
     # written with it, so a curated form reads the whole CLDR phrase.
     for pattern in cldr.relative_patterns(lang):
         if pattern.field in cldr.FIELD_GRAINS.values() and pattern.width != "narrow":
-            tokens = pattern.pattern.lower().split()
+            tokens = fold(pattern.pattern).split()
             for i, token in enumerate(tokens):
                 if token == "{0}" and i + 1 < len(tokens) and tokens[i + 1].endswith("."):
                     put("unit", tokens[i + 1], pattern.field)
@@ -218,7 +242,7 @@ def lexicon(lang: str) -> Lexicon:
         not_temporal=data.not_temporal,
         case_marks_names=data.meta.case_marks_names,
         ordinal_suffixes=tuple(suffixes),
-        particles=tuple(p.lower() for p in data.meta.particles),
-        glue=tuple(sorted({w.lower() for rel, words in data.connectives.items()
+        particles=tuple(fold(p) for p in data.meta.particles),
+        glue=tuple(sorted({fold(w) for rel, words in data.connectives.items()
                            if rel in POST_RELATIONS for w in words})) if data.meta.particles else (),
     )

@@ -12,15 +12,17 @@ from __future__ import annotations
 import functools
 import re
 from collections import defaultdict
-from dataclasses import dataclass
+from dataclasses import dataclass, field
 from types import MappingProxyType
 from typing import Mapping
 
 from .. import cldr
 from ..locale import load_locale
+from ..preparing import fold
 from .forms import Form, compile_form, key_of
 from ..locale import POST_RELATIONS
-from .lexicon import Lexicon, lexicon, trie_regex
+from .lexicon import TRIGGER_CLASSES
+from .lexicon import NO_WORD_AFTER, NO_WORD_BEFORE, Lexicon, is_word_char, lexicon, trie_regex
 
 __all__ = ["Scanner", "scanner_for", "cldr_forms"]
 
@@ -38,6 +40,8 @@ class Connectives:
     joins: Mapping[str, Mapping[str, frozenset[str]]]
     last_words: frozenset[str]  # the last word of every spaced connective before a phrase
     glued_tails: frozenset[str]  # last characters of connectives written without a space
+    #: range joins that languages with particles write as an ending of the first phrase
+    join_endings: Mapping[str, tuple[str, ...]] = field(default_factory=dict)
 
 
 @dataclass(frozen=True, slots=True)
@@ -101,10 +105,11 @@ class Scanner:
         curated = list(self.curated.get(key, ()))
         generated = self._generated(key)
         if curated and generated:
+            # Two expressions, the longer match wins: in one alternation the first form that
+            # matches would win ("last qtr" of a curated form over CLDR's "last qtr.").
             first = _bucket(curated)
             generated = [f for f in generated if not _covered(f, first)]
-            if not generated:
-                return (first,)
+            return (first, _bucket(generated)) if generated else (first,)
         forms = curated + generated
         return (_bucket(forms),) if forms else ()
 
@@ -186,6 +191,23 @@ def _covered(form: Form, curated: Bucket) -> bool:
     return other.lang == form.lang and other.reading == form.reading
 
 
+def _literal_triggers(source: str) -> set[str]:
+    """The words that find a form without trigger slots: its longest word that must be there,
+    else every word of its first choice that must be there ("(halbjahr|jahreshälfte)")."""
+    plain: list[str] = []
+    choices: list[list[str]] = []
+    for token in source.strip().lstrip("~").split():
+        if token.endswith("?") or "{" in token:
+            continue
+        if token.startswith("(") and token.endswith(")"):
+            choices.append([o.lower() for o in token[1:-1].split("|") if o.isalpha()])
+        elif token.isalpha():
+            plain.append(token.lower())
+    if plain:
+        return {max(plain, key=len)}
+    return set(choices[0]) if choices else set()
+
+
 def cldr_forms(lang: str) -> list[tuple[str, str, tuple[tuple[str, object], ...]]]:
     """Forms generated from the CLDR relative date fields and past/future patterns of ``lang``:
     ``(form, reading, fixed slots)``.
@@ -197,7 +219,7 @@ def cldr_forms(lang: str) -> list[tuple[str, str, tuple[tuple[str, object], ...]
     seen: set[str] = set()
     weekday_fields = cldr.WEEKDAY_FIELDS
     for f in cldr.relative_fields(lang):
-        text = f.text.lower().strip()
+        text = fold(f.text).strip()
         if not text or any(c in text for c in "(){}~") or text in seen:
             continue
         if f.field in weekday_fields and f.width == "narrow":
@@ -221,7 +243,7 @@ def cldr_forms(lang: str) -> list[tuple[str, str, tuple[tuple[str, object], ...]
             reading, fixed = "R2", (("unit", f.field), ("dir", f.offset))
         out.append((text, reading, fixed))
     for p in cldr.relative_patterns(lang):
-        text = p.pattern.lower().strip()
+        text = fold(p.pattern).strip()
         if "{0}" not in text or any(c in text for c in "()~") or text in seen:
             continue
         if p.field in weekday_fields and p.width == "narrow":
@@ -251,13 +273,14 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
     relations: dict[str, dict[str, set[str]]] = defaultdict(lambda: defaultdict(set))
     joins: dict[str, dict[str, set[str]]] = defaultdict(lambda: defaultdict(set))
     ordinal_suffixes: set[str] = set()
+    join_endings: dict[str, tuple[str, ...]] = {}
     glued: set[str] = set()  # words written without a space: connectives of unspaced languages
     for lang in languages:
         data = load_locale(lang)
         unspaced = not data.meta.spaces
         for relation, phrases in data.connectives.items():
             for phrase in phrases:
-                key = " ".join(phrase.lower().split())
+                key = " ".join(fold(phrase).split())
                 if unspaced or relation in POST_RELATIONS and data.meta.particles:
                     glued.add(key)
                 if not key[:1].isalnum():
@@ -269,17 +292,20 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
                 else:
                     relations[key][lang].add(relation)
         ordinal_suffixes.update(data.ordinal_suffixes)
+        if data.meta.particles:
+            join_endings[lang] = tuple(" ".join(fold(w).split()) for w in data.connectives.get("range_join", ())
+                                       if w[:1].isalpha() or w[:1] == "'")
     before_words = [w for w, langs in relations.items()
                     if any(r - POST_RELATIONS for r in langs.values())]
     post_words = [w for w, langs in relations.items() if any(r & POST_RELATIONS for r in langs.values())]
     before_alt = _either([w for w in before_words if w not in glued],
-                         [w for w in before_words if w in glued], r"(?<!\w)(?P<c>{})\s+", r"(?P<c2>{})\s*")
+                         [w for w in before_words if w in glued], NO_WORD_BEFORE + r"(?P<c>{})\s+", r"(?P<c2>{})\s*")
     before = re.compile(rf"(?:{before_alt})$")
     join_alt = _either([w for w in joins if w not in glued], [w for w in joins if w in glued],
                        r"\s+(?P<j>{})\s+", r"\s*(?P<j2>{})\s*")
     join = re.compile(rf"(?:{join_alt}|\s*(?P<dash>-)\s*)")
     post_alt = _either([w for w in post_words if w not in glued], [w for w in post_words if w in glued],
-                       r"\s+(?P<s>{})(?!\w)", r"\s*(?P<s2>{})")
+                       r"\s+(?P<s>{})" + NO_WORD_AFTER, r"\s*(?P<s2>{})")
     suffix = re.compile(post_alt)
     osfx = f"(?:{trie_regex(sorted(ordinal_suffixes))})?" if ordinal_suffixes else ""
     spaced_join = trie_regex(sorted(w for w in joins if w not in glued)) or "(?!)"
@@ -298,7 +324,7 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
     last_words = frozenset(w.split()[-1] for w in before_words if w.split() and w not in glued)
     glued_tails = frozenset(w[-1] for w in before_words if w in glued)
     return Connectives(before, join, suffix, day_end, day_start, freeze(relations), freeze(joins),
-                       last_words, glued_tails)
+                       last_words, glued_tails, MappingProxyType(join_endings))
 
 
 @functools.lru_cache(maxsize=64)
@@ -336,16 +362,23 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
     leaders_spaced: set[str] = set()
     leaders_unspaced: set[str] = set()
     cldr_triggers: dict[bool, set[str]] = {True: set(), False: set()}
+    lang_triggers: dict[str, set[str]] = defaultdict(set)
     for p in pending:
         lex = lexicons[p.lang]
         for key in _cheap_first(p.source, lex):
             generated[key].append(p)
         first = p.source.split()[0] if p.source.split() else ""
-        if lex.spaces and re.fullmatch(r"\w+", first):
-            leaders_spaced.add(first)
+        word = ""
+        for ch in first:  # the first word of the phrase ("l" of "l'année", "следв" of "следв.")
+            if not is_word_char(ch):
+                break
+            word += ch
+        if lex.spaces and word and not word[0].isdigit():
+            leaders_spaced.add(word)
         trigger_word = _cheap_trigger(p.source, lex.spaces)
         if trigger_word:
             cldr_triggers[lex.spaces].add(trigger_word)
+            lang_triggers[p.lang].add(trigger_word)
     for form in forms:
         target = curated
         if form.spaced:
@@ -360,6 +393,10 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
         (leaders_spaced if form.spaced else leaders_unspaced).update(form.leaders)
     # Words of CLDR phrases without slots ("now") trigger too.
     extra = {max(f.source.split(), key=len) for f in forms if f.fixed == () and f.reading == "NOW"}
+    # A form with no slot of a trigger class ("das erste Halbjahr") is found by its words.
+    for f in forms:
+        if not any(cls in TRIGGER_CLASSES for _, cls in f.slots):
+            extra |= _literal_triggers(f.source)
     spaced = sorted({t for lex in lexicons.values() if lex.spaces for t in lex.triggers} | extra
                     | cldr_triggers[True])
     quiet = {w for lang in languages for w in load_locale(lang).quiet}
@@ -372,14 +409,25 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
     # trackers, and never start a date.
     parts = [r"\d(?<![\d.,:/#]\d)(?<![^\W\d_]-\d)"]
     if spaced:
-        parts.append(rf"(?<!\w){trie_regex(spaced)}(?!\w)")
+        parts.append(f"{NO_WORD_BEFORE}{trie_regex(spaced)}{NO_WORD_AFTER}")
     if unspaced:
         parts.append(trie_regex(unspaced))
+    # Languages that glue endings and postpositions to words: a time word followed by one
+    # triggers too ("haftaki", "지난주에", "지난주부터").
+    for lang, lex in lexicons.items():
+        if lex.spaces and (lex.particles or lex.glue):
+            words = sorted((set(lex.triggers) | lang_triggers[lang]) - quiet)
+            if not words:
+                continue
+            ends = f"(?:{trie_regex(lex.particles)})?" if lex.particles else ""
+            glue = f"(?={trie_regex(lex.glue)})|" if lex.glue else ""
+            parts.append(f"{NO_WORD_BEFORE}(?:{trie_regex(words)}){ends}(?:{glue}{NO_WORD_AFTER})")
     trigger = re.compile("|".join(parts))
     triggers = set(spaced) | set(unspaced)
     spaced_leaders = sorted(w for w in leaders_spaced if w not in triggers)
     unspaced_leaders = sorted(w for w in leaders_unspaced if w not in triggers)
-    leader_rx = re.compile(_either(spaced_leaders, unspaced_leaders, r"(?<!\w){}(?!\w)", r"{}"))
+    leader_rx = re.compile(_either(spaced_leaders, unspaced_leaders,
+                                   NO_WORD_BEFORE + "{}" + NO_WORD_AFTER, "{}"))
     return Scanner(
         languages=languages,
         trigger=trigger,
