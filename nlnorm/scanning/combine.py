@@ -105,17 +105,22 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
         if i + 1 < n:
             b = found[i + 1]
             gap = conn.join.fullmatch(text, a.span.end, b.span.start)
-            if gap is not None:
-                word = _group(gap, "j", "j2")
+            # The join may be the ending of the first phrase itself, with only white space to
+            # the second: Turkish "Mart'tan Nisan'a kadar".
+            ending = gap is None and _ends_with_join(conn, text, a) and \
+                not text[a.span.end:b.span.start].strip()
+            if gap is not None or ending:
+                word = _group(gap, "j", "j2") if gap is not None else None
                 needs_between = word is not None and _is_and(scanner, word, a.lang)
-                if (not needs_between or "between" in pre_rel) and (
-                        not (a.weak and b.weak) or pre_rel & {"between", "from"}):
+                end = b.span.end
+                post = conn.suffix.match(text, end)
+                post_rel = _relations(scanner, _group(post, "s", "s2") or "", b.lang) if post else frozenset()
+                closed = "between_post" in post_rel  # "1 Mart ile 15 Mart arasında"
+                if (not needs_between or "between" in pre_rel or closed) and (
+                        not (a.weak and b.weak) or pre_rel & {"between", "from"} or closed):
                     start = pre_start if pre_rel & {"between", "from"} else a.span.start
-                    end = b.span.end
-                    post = conn.suffix.match(text, end)
-                    if post is not None and _relations(scanner, _group(post, "s", "s2") or "", b.lang) \
-                            & {"until_post"}:
-                        end = post.end()  # "まで" closing a range
+                    if post is not None and post_rel & {"until_post", "between_post"}:
+                        end = post.end()  # "まで", "arasında" closing a range
                     out.append(_range(a, b, start, end, pre_word, scanner))
                     i += 2
                     continue
@@ -201,6 +206,14 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
         out.append(replace(a, weak=False) if a.weak else a)
         i += 1
     return tuple(out)
+
+
+def _ends_with_join(conn, text: str, a: Candidate) -> bool:  # type: ignore[no-untyped-def]
+    """Whether the phrase ``a`` ends with a range join of its language written as an ending
+    (languages with particles: the Turkish ablative "Mart'tan")."""
+    endings = conn.join_endings.get(a.lang, ())
+    phrase = text[a.span.start : a.span.end]
+    return any(len(phrase) > len(e) and phrase.endswith(e) for e in endings)
 
 
 def _is_and(scanner: Scanner, word: str, lang: str) -> bool:

@@ -310,6 +310,18 @@ def compile_form(
             rx = "".join(parts)
             token_samples.append((samples, optional))
         pieces.append((rx, optional, firsts, leaders, keys))
+    if lex.spaces and (lex.particles or lex.glue):
+        # An ending or a glued postposition continues the word the match ends with ("haftaki",
+        # "martta", "지난주부터"), so the runs a form can start with include those words too.
+        endings = tuple(lex.particles) + tuple(g.split()[0] for g in lex.glue if g.split())
+        for i in range(len(token_samples)):
+            if all(opt for _, opt in token_samples[i + 1:]):
+                samples_i, opt_i = token_samples[i]
+                grown = [t + e for t in samples_i for e in endings][:_MAX_SAMPLES]
+                token_samples[i] = (list(samples_i) + grown, opt_i)
+                if i == 0 or all(opt for _, opt in token_samples[:i]):
+                    rx_i, optional_i, firsts_i, leaders_i, keys_i = pieces[i]
+                    pieces[i] = (rx_i, optional_i, firsts_i, leaders_i, keys_i | {key_of(t) for t in grown})
     # Join tokens; an optional token takes its separator with it.
     regex = ""
     first_chars: set[str] = set()
