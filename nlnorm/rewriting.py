@@ -80,6 +80,16 @@ def _alternative(r: Reading) -> Alternative:
     )
 
 
+def _typo_note(r: Resolved) -> str:
+    typo = r.candidate.slot("typo")
+    if typo is None:
+        for part in r.candidate.parts:
+            typo = part.slot("typo")
+            if typo is not None:
+                break
+    return f"typo: {typo}; " if typo else ""
+
+
 @functools.lru_cache(maxsize=256)
 def reference(ctx: "Context") -> Reference:
     """The context as the output reports it (cached: contexts are frozen)."""
@@ -121,7 +131,7 @@ def annotate(prepared: Prepared, resolved: tuple[Resolved, ...], ctx: "Context",
                 value=iv.value,
                 lang=r.candidate.lang,
                 reading=r.chosen.reading,
-                note=r.chosen.note,
+                note=_typo_note(r) + r.chosen.note,
                 confidence=r.candidate.confidence,
                 alternatives=tuple(_alternative(a) for a in r.alternatives),
             )

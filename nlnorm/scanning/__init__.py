@@ -9,6 +9,7 @@ from typing import TYPE_CHECKING
 from ..model import Candidate, Span
 from ..preparing import Prepared
 from .combine import combine
+from .typos import typo_candidates
 from .forms import CANONICAL_SLOT
 from .lexicon import REGEX_CLASSES, is_word_char
 from .scanner import Scanner, scanner_for
@@ -35,7 +36,16 @@ def scan(prepared: Prepared, ctx: "Context") -> tuple[Candidate, ...]:
 
 
 def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
-    """:func:`scan` with an explicit scanner (no context needed)."""
+    """:func:`scan` with an explicit scanner (no context needed): exact phrases, then the
+    phrases a one-letter typo hid (lower confidence, see :mod:`nlnorm.scanning.typos`)."""
+    exact = _scan_exact(prepared, scanner)
+    fuzzy = typo_candidates(prepared, scanner, exact, _scan_exact)
+    if not fuzzy:
+        return exact
+    return tuple(sorted(exact + fuzzy, key=lambda c: c.span.start))
+
+
+def _scan_exact(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     text = prepared.text
     hits = [m.start() for m in scanner.trigger.finditer(text)]
     if not hits:
@@ -100,6 +110,8 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
                 m = bucket.regex.match(text, pos)
                 if m is None:
                     continue
+                if isinstance(k, str) and len(bucket.forms) > 1:
+                    m = _longest(bucket, text, pos, m)
                 end = m.end()
                 if end > best_end:
                     best, best_end = (m, bucket.forms[m.lastgroup]), end  # type: ignore[index]
@@ -117,6 +129,18 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     if not found:
         return ()
     return combine(prepared, found, scanner)
+
+
+def _longest(bucket, text: str, pos: int, m):  # type: ignore[no-untyped-def]
+    """The longest match of a bucket's forms at ``pos``. Without word boundaries a form may
+    end anywhere ("这个周" inside "这个周末"), so the first alternative that matches is not
+    always the longest; on a tie the bucket's order (the more specific form) stays."""
+    best = m
+    for form in bucket.forms.values():
+        other = form.regex.match(text, pos)
+        if other is not None and other.end() > best.end():
+            best = other
+    return best
 
 
 def _candidate(m, form, scanner: Scanner, prepared: Prepared) -> Candidate:  # type: ignore[no-untyped-def]
@@ -141,6 +165,11 @@ def _candidate(m, form, scanner: Scanner, prepared: Prepared) -> Candidate:  # t
     if not weak and m.start() > 0 and text_starts_digit(prepared.text, m.start()):
         prev = prepared.text[max(0, m.start() - 24) : m.start()].split()
         if prev and prev[-1].strip(":#-") in lex.not_temporal:
+            weak = True
+    if not weak and m.start() > 0 and not lex.spaces and lex.not_temporal:
+        # Without spaces the word is glued to the phrase: "每周一" (every Monday), "版本2025年".
+        before = prepared.text[max(0, m.start() - 12) : m.start()].rstrip()
+        if any(before.endswith(w) for w in lex.not_temporal):
             weak = True
     nameable = weak and form.single in ("month_wide", "weekday") and not form.weak
     return Candidate(Span(m.start(), m.end()), form.lang, form.reading, tuple(slots), weak,

@@ -1,0 +1,196 @@
+"""A small, bounded tolerance for misspelt time words.
+
+One edit (a letter left out, added, changed, or two neighbours swapped) on a time word of six
+or more letters in a language written with spaces: "yesterdy", "letze Woche", "wendesday".
+The question is scanned again with the word corrected; a phrase found only that way gets a
+lower ``confidence`` and a note saying how the word was read. A correction never turns a known
+word into a time word, never yields a weak phrase, and never touches ambiguous or quiet words
+(the look-alikes of ``[ambiguous]``), so the trap lists stay clean.
+"""
+
+from __future__ import annotations
+
+import re
+from collections import defaultdict
+from dataclasses import dataclass, replace
+from types import MappingProxyType
+from typing import TYPE_CHECKING, Mapping
+
+from ..locale import load_locale
+from ..model import Candidate, Span
+from ..preparing import Prepared
+
+if TYPE_CHECKING:
+    from .scanner import Scanner
+
+__all__ = ["TypoIndex", "typo_index", "corrections", "CONFIDENCE", "within_one_edit"]
+
+#: Confidence of a phrase found only after correcting a typo.
+CONFIDENCE = 0.8
+MIN_LENGTH = 6  # time words shorter than this are never corrected
+_WORD = re.compile(r"[^\W\d_]{5,}")
+
+
+@dataclass(frozen=True, slots=True)
+class TypoIndex:
+    """Time words by their one-letter deletions, and every word the languages know."""
+
+    deletions: Mapping[str, frozenset[str]]
+    known: frozenset[str]
+    heads: frozenset[str]  # first three letters of the time words
+    tails: frozenset[str]  # last three letters
+
+
+def _deletions(word: str) -> set[str]:
+    return {word[:i] + word[i + 1 :] for i in range(len(word))}
+
+
+def typo_index(languages: tuple[str, ...], lexicons: tuple[object, ...]) -> TypoIndex | None:
+    """The index of the spaced languages among ``languages`` (``None`` if there are none)."""
+    from .lexicon import Lexicon
+
+    by_deletion: dict[str, set[str]] = defaultdict(set)
+    known: set[str] = set()
+    heads: set[str] = set()
+    tails: set[str] = set()
+    any_spaced = False
+    for lang, lex in zip(languages, lexicons):
+        assert isinstance(lex, Lexicon)
+        data = load_locale(lang)
+        if not lex.spaces:
+            continue
+        any_spaced = True
+        refused = set(lex.ambiguous) | set(data.quiet) | set(lex.not_temporal)
+        words: set[str] = set()
+        for table in lex.words.values():
+            for entry in table:
+                for token in entry.split():
+                    known.add(token)
+                    if token.isalpha() and len(token) >= MIN_LENGTH and token not in refused:
+                        words.add(token)
+        for phrases in data.connectives.values():
+            for phrase in phrases:
+                for token in phrase.lower().split():
+                    known.add(token)
+                    if token.isalpha() and len(token) >= MIN_LENGTH:
+                        words.add(token)
+        known |= refused
+        for word in words:
+            by_deletion[word].add(word)
+            for d in _deletions(word):
+                by_deletion[d].add(word)
+            heads.add(word[:3])
+            tails.add(word[-3:])
+    if not any_spaced:
+        return None
+    return TypoIndex(MappingProxyType({k: frozenset(v) for k, v in by_deletion.items()}),
+                     frozenset(known), frozenset(heads), frozenset(tails))
+
+
+def within_one_edit(a: str, b: str) -> bool:
+    """Whether ``a`` becomes ``b`` by one deletion, insertion, substitution or swap of
+    neighbours (Damerau-Levenshtein distance 1).
+
+    >>> within_one_edit("yesterdy", "yesterday"), within_one_edit("wendesday", "wednesday")
+    (True, True)
+    >>> within_one_edit("mouths", "months"), within_one_edit("weekly", "weeks")
+    (True, False)
+    """
+    if a == b:
+        return False
+    la, lb = len(a), len(b)
+    if abs(la - lb) > 1:
+        return False
+    i = 0
+    while i < min(la, lb) and a[i] == b[i]:
+        i += 1
+    if la == lb:
+        if a[i + 1 :] == b[i + 1 :]:
+            return True
+        return i + 1 < la and a[i] == b[i + 1] and a[i + 1] == b[i] and a[i + 2 :] == b[i + 2 :]
+    if la > lb:
+        return a[i + 1 :] == b[i:]
+    return a[i:] == b[i + 1 :]
+
+
+def corrections(text: str, index: TypoIndex, taken: list[Span]) -> list[tuple[int, int, str]]:
+    """Words of ``text`` one edit from a time word: ``(start, end, time word)``, outside the
+    spans already ``taken`` by exact phrases."""
+    out: list[tuple[int, int, str]] = []
+    heads, tails, known, deletions = index.heads, index.tails, index.known, index.deletions
+    for m in _WORD.finditer(text):
+        word = m.group()
+        if word in known or (word[:3] not in heads and word[-3:] not in tails):
+            continue
+        start, end = m.span()
+        if any(s.start < end and start < s.end for s in taken):
+            continue
+        found = set(deletions.get(word, ()))
+        for d in _deletions(word):
+            found |= deletions.get(d, frozenset())
+        found = {w for w in found if within_one_edit(word, w)}
+        if len(found) > 1:
+            same_start = {w for w in found if w[0] == word[0]}
+            found = same_start if len(same_start) == 1 else set()
+        if len(found) == 1:
+            out.append((start, end, found.pop()))
+    return out
+
+
+def corrected(prepared: Prepared, fixes: list[tuple[int, int, str]]) -> tuple[Prepared, list[int]]:
+    """The prepared text with each word replaced, and for every character of the new text the
+    index of the character of ``prepared.text`` it stands for (plus one entry for the end)."""
+    text = prepared.text
+    pieces: list[str] = []
+    back: list[int] = []
+    cursor = 0
+    for start, end, word in fixes:
+        pieces.append(text[cursor:start])
+        back.extend(range(cursor, start))
+        pieces.append(word)
+        # Every letter of the replacement maps into the misspelt word, first onto its first
+        # letter and last onto its last, so a phrase covering one covers the other.
+        span, size = end - start, len(word)
+        back.extend(start + (i * (span - 1)) // max(size - 1, 1) for i in range(size))
+        cursor = end
+    pieces.append(text[cursor:])
+    back.extend(range(cursor, len(text)))
+    back.append(len(text))
+    new_text = "".join(pieces)
+    original_index = [prepared.to_original(i, i + 1)[0] if i < len(text) else len(prepared.original)
+                      for i in back]
+    return Prepared(prepared.original, new_text, tuple(original_index)), back
+
+
+def mapped(c: Candidate, back: list[int], note: str) -> Candidate:
+    """A candidate of the corrected text, with its spans moved back onto the prepared text."""
+    parts = tuple(mapped(p, back, note) for p in c.parts)
+    span = Span(back[c.span.start], back[c.span.end - 1] + 1)
+    return replace(c, span=span, parts=parts, confidence=CONFIDENCE,
+                   slots=c.slots + (("typo", note),) if not c.parts else c.slots)
+
+
+def typo_candidates(prepared: Prepared, scanner: "Scanner", exact: tuple[Candidate, ...],
+                    scan_exact) -> tuple[Candidate, ...]:  # type: ignore[no-untyped-def]
+    """Phrases found only after correcting misspelt time words."""
+    cache = scanner._cache
+    if "typos" not in cache:  # built on first use, kept with the scanner
+        cache["typos"] = typo_index(  # type: ignore[assignment]
+            scanner.languages, tuple(scanner.lexicons[lang] for lang in scanner.languages))
+    index: TypoIndex | None = cache["typos"]  # type: ignore[assignment]
+    if index is None:
+        return ()
+    fixes = corrections(prepared.text, index, [c.span for c in exact])
+    if not fixes:
+        return ()
+    fixed, back = corrected(prepared, fixes)
+    found = scan_exact(fixed, scanner)
+    out = []
+    for c in found:
+        covered = [f for f in fixes if back[c.span.start] <= f[0] and f[1] <= back[c.span.end - 1] + 1]
+        if not covered or any(e.span.start < back[c.span.end - 1] + 1 and back[c.span.start] < e.span.end
+                              for e in exact):
+            continue
+        note = ", ".join(f"{prepared.text[s:e]!r} read as {w!r}" for s, e, w in covered)
+        out.append(mapped(c, back, note))
+    return tuple(out)
