@@ -44,6 +44,7 @@ RELATIONS = (
     "between_post",
     "due_post",
     "deadline",
+    "article",  # a word before a day number that belongs to the date ("the", "le", "el")
 )
 #: Relations of words that follow the phrase they bind (postpositions, "onwards").
 POST_RELATIONS = frozenset({"since_suffix", "from_suffix", "since_post", "after_post", "before_post", "until_post",

@@ -275,6 +275,7 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
     ordinal_suffixes: set[str] = set()
     join_endings: dict[str, tuple[str, ...]] = {}
     glued: set[str] = set()  # words written without a space: connectives of unspaced languages
+    articles: set[str] = set()  # words before a day number inside a range ("the 1st and the 15th")
     for lang in languages:
         data = load_locale(lang)
         unspaced = not data.meta.spaces
@@ -283,9 +284,11 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
                 key = " ".join(fold(phrase).split())
                 if unspaced or relation in POST_RELATIONS and data.meta.particles:
                     glued.add(key)
-                if not key[:1].isalnum():
-                    glued.add(key)  # "~", "-": no space needed
-                if relation == "range_join":
+                if not key[:1].isalnum() or key[-1:] == "'":
+                    glued.add(key)  # "~", "-", an elided "d'": no space needed
+                if relation == "article":
+                    articles.add(key)
+                elif relation == "range_join":
                     joins[key][lang].add("join")
                 elif relation == "between_join":
                     joins[key][lang].add("between_join")
@@ -309,13 +312,14 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
     suffix = re.compile(post_alt)
     osfx = f"(?:{trie_regex(sorted(ordinal_suffixes))})?" if ordinal_suffixes else ""
     spaced_join = trie_regex(sorted(w for w in joins if w not in glued)) or "(?!)"
+    article = trie_regex(sorted(articles)) or "(?!)"
     day_end = re.compile(
-        rf"(?:\s+(?P<j>{spaced_join})\s+|\s*-\s*)(?:the\s+)?(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?![\w/.:-])"
+        rf"(?:\s+(?P<j>{spaced_join})\s+|\s*-\s*)(?:(?:{article})\s+)?(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?![\w/.:-])"
         rf"(?:,?\s+(?P<y>(?:19|20)\d\d)(?!\w))?"
     )
     spaced_before = trie_regex(sorted(w for w in before_words if w not in glued)) or "(?!)"
     day_start = re.compile(
-        rf"(?<!\w)(?:(?P<pre>{spaced_before})\s+)?(?:the\s+)?"
+        rf"(?<!\w)(?:(?P<pre>{spaced_before})\s+)?(?:(?:{article})\s+)?"
         rf"(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?:\s+(?P<j>{spaced_join})\s+|\s*-\s*)$"
     )
     freeze = lambda table: MappingProxyType(  # noqa: E731
