@@ -162,6 +162,8 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
         post_rel = _relations(scanner, post_word, a.lang) if post_word else frozenset()
         if "from_suffix" in post_rel and "from" in pre_rel:
             post_rel = post_rel | {"since_suffix"}  # "from X on"
+        if "due_post" in post_rel:
+            a = _deadline(a)  # a deadline word after the day, as verb-final order puts it
         bound = next((_POST_BOUND[r] for r in ("since_post", "after_post", "before_post",
                                                  "until_post", "since_suffix") if r in post_rel), None)
         if bound is not None and post is not None:
