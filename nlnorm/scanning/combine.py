@@ -61,15 +61,18 @@ def _is_name(prepared: Prepared, c: Candidate, scanner: Scanner) -> bool:
 
 
 def _group(m: "re.Match[str]", *names: str) -> str | None:
+    # An expression holds only the groups its languages need (no spaced words, no "c").
+    groups = m.groupdict()
     for name in names:
-        if m.group(name) is not None:
-            return m.group(name)
+        if groups.get(name) is not None:
+            return groups[name]
     return None
 
 
 def _start(m: "re.Match[str]", *names: str) -> int:
+    groups = m.groupdict()
     for name in names:
-        if m.group(name) is not None:
+        if groups.get(name) is not None:
             return m.start(name)
     return m.start()
 
@@ -93,7 +96,8 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
         k = a.span.start - 1
         pre = None
         if k >= 0 and (text[k] in glued_tails or (
-                k > 0 and text[k] == " " and text[text.rfind(" ", 0, k) + 1:k] in last_words)):
+                k > 0 and text[k] == " " and (text[text.rfind(" ", 0, k) + 1:k] in last_words
+                                              or _before_spaces(text, k) in glued_tails))):
             pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)
         pre_word = _group(pre, "c", "c2") if pre else None
         pre_start = _start(pre, "c", "c2") if pre else a.span.start
@@ -127,13 +131,14 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
         # "March 3-17", "between March 3 and 17".
         if _has_day(a):
             m = conn.day_end.match(text, a.span.end)
-            if m is not None and (m.group("j") is None or not _is_and(scanner, m.group("j"), a.lang)
+            join = _group(m, "j", "j2") if m is not None else None
+            if m is not None and (join is None or not _is_and(scanner, join, a.lang)
                                   or "between" in pre_rel):
                 year = int(m.group("y")) if m.group("y") else a.slot("year")
                 first = _with(a, year=year)
                 last = Candidate(
-                    Span(m.start("d"), m.end()), a.lang, "R18" if year else a.reading,
-                    _slots(a, day=int(m.group("d")), year=year),
+                    Span(_start(m, "d", "d2"), m.end()), a.lang, "R18" if year else a.reading,
+                    _slots(a, day=int(_group(m, "d", "d2") or 0), year=year),
                 )
                 start = pre_start if pre_rel & {"between", "from"} else a.span.start
                 out.append(_range(first, last, start, m.end(), pre_word, scanner))
@@ -216,6 +221,13 @@ def _ends_with_join(conn, text: str, a: Candidate) -> bool:  # type: ignore[no-u
     endings = conn.join_endings.get(a.lang, ())
     phrase = text[a.span.start : a.span.end]
     return any(len(phrase) > len(e) and phrase.endswith(e) for e in endings)
+
+
+def _before_spaces(text: str, k: int) -> str:
+    """The character before the run of spaces that ends at ``k``."""
+    while k >= 0 and text[k] == " ":
+        k -= 1
+    return text[k] if k >= 0 else ""
 
 
 def _is_and(scanner: Scanner, word: str, lang: str) -> bool:

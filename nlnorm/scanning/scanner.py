@@ -273,6 +273,7 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
     relations: dict[str, dict[str, set[str]]] = defaultdict(lambda: defaultdict(set))
     joins: dict[str, dict[str, set[str]]] = defaultdict(lambda: defaultdict(set))
     ordinal_suffixes: set[str] = set()
+    unspaced_suffixes: set[str] = set()  # "日" of "15日": a day of a language without spaces
     join_endings: dict[str, tuple[str, ...]] = {}
     glued: set[str] = set()  # words written without a space: connectives of unspaced languages
     articles: set[str] = set()  # words before a day number inside a range ("the 1st and the 15th")
@@ -295,6 +296,8 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
                 else:
                     relations[key][lang].add(relation)
         ordinal_suffixes.update(data.ordinal_suffixes)
+        if unspaced:
+            unspaced_suffixes.update(fold(s) for s in data.ordinal_suffixes)
         if data.meta.particles:
             join_endings[lang] = tuple(" ".join(fold(w).split()) for w in data.connectives.get("range_join", ())
                                        if w[:1].isalpha() or w[:1] == "'")
@@ -316,6 +319,10 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
     day_end = re.compile(
         rf"(?:\s+(?P<j>{spaced_join})\s+|\s*-\s*)(?:(?:{article})\s+)?(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?![\w/.:-])"
         rf"(?:,?\s+(?P<y>(?:19|20)\d\d)(?!\w))?"
+        # Without spaces: a glued join and a day that its suffix closes ("3月1日到15日").
+        + (rf"|\s*(?P<j2>{trie_regex(sorted(w for w in joins if w in glued))})\s*"
+           rf"(?P<d2>3[01]|[12]\d|0?[1-9])(?:{trie_regex(sorted(unspaced_suffixes))})"
+           if unspaced_suffixes and any(w in glued for w in joins) else "")
     )
     spaced_before = trie_regex(sorted(w for w in before_words if w not in glued)) or "(?!)"
     day_start = re.compile(
@@ -398,15 +405,16 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
     # Words of CLDR phrases without slots ("now") trigger too.
     extra = {max(f.source.split(), key=len) for f in forms if f.fixed == () and f.reading == "NOW"}
     # A form with no slot of a trigger class ("das erste Halbjahr") is found by its words.
+    extra_unspaced: set[str] = set()
     for f in forms:
         if not any(cls in TRIGGER_CLASSES for _, cls in f.slots):
-            extra |= _literal_triggers(f.source)
+            (extra if f.spaced else extra_unspaced).update(_literal_triggers(f.source))
     spaced = sorted({t for lex in lexicons.values() if lex.spaces for t in lex.triggers} | extra
                     | cldr_triggers[True])
     quiet = {w for lang in languages for w in load_locale(lang).quiet}
     spaced = [t for t in spaced if t not in quiet]
     unspaced = sorted({t for lex in lexicons.values() if not lex.spaces for t in lex.triggers}
-                      | cldr_triggers[False])
+                      | cldr_triggers[False] | extra_unspaced)
     # A digit that does not continue a number ("2025.1" triggers once); written with the
     # look-behind after the digit so that the regex engine can skip ahead by character class.
     # Digits after a letter and a hyphen are a ticket key ("WRN-2025"), common practice in
