@@ -188,16 +188,18 @@ class _ClassInfo:
     leaders: frozenset[str]
 
 
-_CLASS_INFO: dict[tuple[int, str], _ClassInfo] = {}
+# Keyed by the identity of the lexicon's word table, which the entry keeps alive so that the
+# identity cannot be reused by another table.
+_CLASS_INFO: dict[tuple[int, str], tuple[object, _ClassInfo]] = {}
 
 
 def _class_info(lex: Lexicon, cls: str) -> _ClassInfo:
     """What a slot class contributes to a form's first characters, keys, leading words and
     samples (computed once per lexicon and class)."""
     key = (id(lex.words), cls)
-    found = _CLASS_INFO.get(key)
-    if found is not None:
-        return found
+    entry = _CLASS_INFO.get(key)
+    if entry is not None and entry[0] is lex.words:
+        return entry[1]
     table = lex.words.get(cls, {})
     samples = list(_DIGIT_SAMPLES.get(cls, ()))
     samples += [w for w in table if w]
@@ -212,8 +214,64 @@ def _class_info(lex: Lexicon, cls: str) -> _ClassInfo:
     else:
         leaders = {w.split()[0] for w in table if len(w.split()) > 1}
     found = _ClassInfo(tuple(samples), frozenset(firsts), frozenset(keys), frozenset(leaders))
-    _CLASS_INFO[key] = found
+    _CLASS_INFO[key] = (lex.words, found)
     return found
+
+
+@dataclass(frozen=True, slots=True)
+class FormHead:
+    """What the scanner must know of a form before compiling it: how it can start."""
+
+    first_keys: frozenset[str]
+    first_chars: frozenset[str]
+    leaders: frozenset[str]
+    slot_classes: frozenset[str]
+
+
+_SLOT = re.compile(r"\{([a-z_0-9]+)\}")
+
+
+def form_head(source: str, lex: Lexicon) -> FormHead:
+    """How ``source`` can start, read off its leading tokens without building its pattern."""
+    tokens = source.strip().lstrip("~").split()
+    keys: set[str] = set()
+    chars: set[str] = set()
+    leaders: set[str] = set()
+    for token in tokens:
+        optional = token.endswith("?") and len(token) > 1
+        body = token[:-1] if optional else token
+        if body.startswith("(") and body.endswith(")") and "{" not in body:
+            options = [fold(o) for o in body[1:-1].split("|") if o]
+            keys |= {key_of(o) for o in options}
+            chars |= {o[0] for o in options}
+            leaders |= {o for o in options if o[0].isalpha()}
+        else:
+            m = _TOKEN_PIECE.match(body)
+            if m is None:
+                continue
+            cls, choice, literal = m.group(1), m.group(2), m.group(3)
+            if choice is not None:
+                options = [fold(o) for o in choice.split("|") if o]
+                keys |= {key_of(o) for o in options}
+                chars |= {o[0] for o in options}
+            elif cls:
+                if cls not in lex.regex:
+                    raise LocaleError(f"form {source!r} uses unknown slot {{{cls}}}")
+                info = _class_info(lex, cls)
+                keys |= info.keys
+                chars |= info.firsts
+                leaders |= info.leaders
+            elif literal:
+                lowered = fold(literal)
+                keys.add(key_of(lowered))
+                chars.add(lowered[0])
+                word = re.match(r"\w+", lowered)
+                if word and word.end() == len(lowered) and m.end() == len(body):
+                    leaders.add(lowered)
+        if not optional:
+            break
+    return FormHead(frozenset(keys), frozenset(chars), frozenset(leaders),
+                    frozenset(_SLOT.findall(source)))
 
 
 def compile_form(

@@ -19,7 +19,7 @@ from typing import Mapping
 from .. import cldr
 from ..locale import load_locale
 from ..preparing import fold
-from .forms import Form, compile_form, key_of
+from .forms import Form, FormHead, compile_form, form_head, key_of
 from ..locale import POST_RELATIONS
 from .lexicon import TRIGGER_CLASSES
 from .lexicon import NO_WORD_AFTER, NO_WORD_BEFORE, Lexicon, is_word_char, lexicon, trie_regex
@@ -78,12 +78,11 @@ class Scanner:
     languages: tuple[str, ...]
     trigger: re.Pattern[str]
     leaders: re.Pattern[str]
-    curated: Mapping[object, tuple[Form, ...]]
-    generated: Mapping[object, tuple["Pending", ...]]  # by first run only; compiled on use
+    curated: Mapping[object, tuple["Pending", ...]]  # by first run only; compiled on use
+    generated: Mapping[object, tuple["Pending", ...]]
     lexicons: Mapping[str, Lexicon]
     connectives: Connectives
-    curated_forms: tuple[Form, ...]
-    pending: tuple["Pending", ...]
+    pending: tuple["Pending", ...]  # every form, curated and CLDR-generated
     _cache: dict[object, tuple[Bucket, ...]]
     _compiled: dict[int, Form]  # CLDR-generated forms compiled so far, by order
     unspaced: bool = False  # some language is written without spaces: try per-character buckets
@@ -92,7 +91,7 @@ class Scanner:
     @property
     def forms(self) -> tuple[Form, ...]:
         """Every form, the CLDR-generated ones compiled now (for tests and tools)."""
-        return self.curated_forms + tuple(p.form(self.lexicons, self._compiled) for p in self.pending)
+        return tuple(p.form(self.lexicons, self._compiled) for p in self.pending)
 
     def buckets(self, key: object) -> tuple[Bucket, ...]:
         found = self._cache.get(key)
@@ -102,8 +101,8 @@ class Scanner:
         return found
 
     def _build(self, key: object) -> tuple[Bucket, ...]:
-        curated = list(self.curated.get(key, ()))
-        generated = self._generated(key)
+        curated = self._forms(self.curated, key)
+        generated = self._forms(self.generated, key)
         if curated and generated:
             # Two expressions, the longer match wins: in one alternation the first form that
             # matches would win ("last qtr" of a curated form over CLDR's "last qtr.").
@@ -114,13 +113,13 @@ class Scanner:
         return (_bucket(forms),) if forms else ()
 
 
-    def _generated(self, key: object) -> list[Form]:
-        """The CLDR-generated forms that can start with ``key``, compiled now."""
+    def _forms(self, table: Mapping[object, tuple["Pending", ...]], key: object) -> list[Form]:
+        """The forms of ``table`` that can start with ``key``, compiled now."""
         if isinstance(key, tuple):
             first = key[0]
-            pending = self.generated.get(first, ())
+            pending = table.get(first, ())
         else:
-            pending = self.generated.get(key, ())
+            pending = table.get(key, ())
         out = []
         for p in pending:
             form = p.form(self.lexicons, self._compiled)
@@ -143,15 +142,28 @@ class Pending:
     reading: str
     fixed: tuple[tuple[str, object], ...]
     order: int
+    where: str = ""  # the locale file and reading of a curated form (for error messages)
+    spaced: bool = True
 
     def form(self, lexicons: Mapping[str, Lexicon], cache: dict[int, Form] | None = None) -> Form:
         found = cache.get(self.order) if cache is not None else None
         if found is None:
-            found = compile_form(self.source, lexicons[self.lang], self.reading, self.order,
-                                 self.fixed, where=f"CLDR {self.lang}")
+            lex = lexicons[self.lang] if self.lang in lexicons else _root_lexicon(lexicons)
+            found = compile_form(self.source, lex, self.reading, self.order, self.fixed,
+                                 where=self.where or f"CLDR {self.lang}")
             if cache is not None:
                 cache[self.order] = found
         return found
+
+
+def _root_lexicon(lexicons: Mapping[str, Lexicon]) -> Lexicon:
+    """The lexicon of root forms (ISO notation): regex slots only, reported as "und"."""
+    lex = next(iter(lexicons.values()))
+    return Lexicon(
+        lang="und", spaces=True, words=MappingProxyType({}), regex=lex.regex,
+        triggers=frozenset(), ambiguous=frozenset(), not_temporal=frozenset(),
+        case_marks_names=False,
+    )
 
 
 def _cheap_first(source: str, lex: Lexicon) -> set[str]:
@@ -342,7 +354,7 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
 def scanner_for(languages: tuple[str, ...]) -> Scanner:
     """The scanner of ``languages`` (built once per tuple and cached)."""
     lexicons = {lang: lexicon(lang) for lang in languages}
-    forms: list[Form] = []
+    mine: list[tuple[Pending, FormHead]] = []  # curated forms from locales/, not compiled yet
     pending: list[Pending] = []
     order = 0
     root_done = False
@@ -352,23 +364,21 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
         where = f"locales/{lang}.toml [forms]"
         for reading, sources in data.forms.items():
             for source in sources:
-                forms.append(compile_form(source, lex, reading, order, where=f"{where} {reading}"))
+                p = Pending(lang, source, reading, (), order, f"{where} {reading}", lex.spaces)
+                mine.append((p, form_head(source, lex)))
                 order += 1
         for source, reading, fixed in cldr_forms(lang):
-            pending.append(Pending(lang, source, reading, fixed, order))
+            pending.append(Pending(lang, source, reading, fixed, order, "", lex.spaces))
             order += 1
         if not root_done:
             root_done = True
-            root_lex = Lexicon(
-                lang="und", spaces=True, words=MappingProxyType({}), regex=lex.regex,
-                triggers=frozenset(), ambiguous=frozenset(), not_temporal=frozenset(),
-                case_marks_names=False,
-            )
+            root_lex = _root_lexicon(lexicons)
             for reading, sources in data.root_forms.items():
                 for source in sources:
-                    forms.append(compile_form(source, root_lex, reading, order, where="locales/root.toml"))
+                    p = Pending("und", source, reading, (), order, "locales/root.toml", True)
+                    mine.append((p, form_head(source, root_lex)))
                     order += 1
-    curated: dict[object, list[Form]] = defaultdict(list)
+    curated: dict[object, list[Pending]] = defaultdict(list)
     generated: dict[object, list[Pending]] = defaultdict(list)
     leaders_spaced: set[str] = set()
     leaders_unspaced: set[str] = set()
@@ -390,25 +400,21 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
         if trigger_word:
             cldr_triggers[lex.spaces].add(trigger_word)
             lang_triggers[p.lang].add(trigger_word)
-    for form in forms:
-        target = curated
-        if form.spaced:
-            pairs = form.pair_keys
-            if pairs is None:  # too many combinations to list: bucket by the first run only
-                pairs = frozenset((k, "") for k in form.first_keys)
-            for pair in pairs:
-                target[pair].append(form)
+    for p, head in mine:
+        if p.spaced:
+            for key in head.first_keys:
+                curated[key].append(p)
         else:
-            for ch in form.first_chars:
-                target["c:" + ch].append(form)
-        (leaders_spaced if form.spaced else leaders_unspaced).update(form.leaders)
+            for ch in head.first_chars:
+                curated["c:" + ch].append(p)
+        (leaders_spaced if p.spaced else leaders_unspaced).update(head.leaders)
     # Words of CLDR phrases without slots ("now") trigger too.
-    extra = {max(f.source.split(), key=len) for f in forms if f.fixed == () and f.reading == "NOW"}
+    extra = {max(p.source.split(), key=len) for p in pending if p.fixed == () and p.reading == "NOW"}
     # A form with no slot of a trigger class ("das erste Halbjahr") is found by its words.
     extra_unspaced: set[str] = set()
-    for f in forms:
-        if not any(cls in TRIGGER_CLASSES for _, cls in f.slots):
-            (extra if f.spaced else extra_unspaced).update(_literal_triggers(f.source))
+    for p, head in mine:
+        if not head.slot_classes & set(TRIGGER_CLASSES):
+            (extra if p.spaced else extra_unspaced).update(_literal_triggers(p.source))
     spaced = sorted({t for lex in lexicons.values() if lex.spaces for t in lex.triggers} | extra
                     | cldr_triggers[True])
     quiet = {w for lang in languages for w in load_locale(lang).quiet}
@@ -448,8 +454,7 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
         generated=MappingProxyType({k: tuple(v) for k, v in generated.items()}),
         lexicons=MappingProxyType(lexicons),
         connectives=_connectives(languages),
-        curated_forms=tuple(forms),
-        pending=tuple(pending),
+        pending=tuple(p for p, _ in mine) + tuple(pending),
         _cache={},
         _compiled={},
         unspaced=any(not lex.spaces for lex in lexicons.values()),
