@@ -221,6 +221,7 @@ class LocaleData:
         return f"LocaleData({self.code!r}, chain={self.chain!r})"
 
 
+@functools.lru_cache(maxsize=256)
 def _read(path: Path) -> LocaleFile:
     rel = f"locales/{path.name}"
     try:

@@ -31,7 +31,9 @@ REGEX_CLASSES: Mapping[str, str] = MappingProxyType(
         "weeknum": r"(?:5[0-3]|[1-4]\d|0?[1-9])",
         "week2": r"(?:5[0-3]|[1-4]\d|0[1-9])",
         "isoday": r"[1-7]",
-        "numdate": r"(?:\d{1,2}[/.]\d{1,2}[/.](?:\d{4}|\d{2})|\d{4}[/.]\d{1,2}[/.]\d{1,2})(?![/.]?\d)",
+        # Day-first and month-first dates with "/" or "." (two-digit years too), with "-" and a
+        # four-digit year ("14-03-2026", CLDR nl), and year-first with "/" or ".".
+        "numdate": r"(?:\d{1,2}[/.]\d{1,2}[/.](?:\d{4}|\d{2})|\d{1,2}-\d{1,2}-\d{4}|\d{4}[/.]\d{1,2}[/.]\d{1,2})(?![/.-]?\d)",
         "digits": r"\d{1,3}",
     }
 )
@@ -105,6 +107,56 @@ def trie_regex(words: list[str] | tuple[str, ...] | frozenset[str], spaces: str 
         return body + "?" if end else body
 
     return emit(trie)
+
+
+#: Word classes every lexicon answers for, even when the language has no words in them.
+WORD_CLASSES = ("month", "month_wide", "month_abbr", "weekday", "weekday_abbr", "relday",
+                "dayperiod", "unit", "dir", "ordinal", "ordinal_half", "weekend", "to_date",
+                "dayperiod_phrase", "num")
+
+
+class Patterns(Mapping[str, str]):
+    """The regular expression of each slot class, built on first use (a trie per word class;
+    most classes of most languages are never needed in one run)."""
+
+    def __init__(self, words: Mapping[str, Mapping[str, object]], sep: str,
+                 suffixes: tuple[str, ...]) -> None:
+        self._words = words
+        self._sep = sep
+        self._suffixes = suffixes
+        self._built: dict[str, str] = {}
+        self._names = frozenset(words) | frozenset(REGEX_CLASSES) | frozenset(WORD_CLASSES)
+
+    def __getitem__(self, cls: str) -> str:
+        found = self._built.get(cls)
+        if found is None:
+            found = self._build(cls)
+            self._built[cls] = found
+        return found
+
+    def _build(self, cls: str) -> str:
+        if cls not in self._names:
+            raise KeyError(cls)
+        if cls == "day":
+            tail = f"(?:{trie_regex(self._suffixes)})?" if self._suffixes else ""
+            return REGEX_CLASSES["day"] + tail + "(?!\\d)"
+        if cls == "num":
+            table = self._words.get("num")
+            words = f"|(?:{trie_regex(sorted(table), self._sep)})" if table else ""
+            return r"(?:\d{1,3}" + words + ")"
+        if cls in REGEX_CLASSES:
+            return REGEX_CLASSES[cls]
+        table = self._words.get(cls)
+        return "(?:" + trie_regex(sorted(table), self._sep) + ")" if table else "(?!)"
+
+    def __contains__(self, cls: object) -> bool:
+        return cls in self._names
+
+    def __iter__(self):  # type: ignore[no-untyped-def]
+        return iter(sorted(self._names))
+
+    def __len__(self) -> int:
+        return len(self._names)
 
 
 @dataclass(frozen=True, slots=True)
@@ -214,19 +266,7 @@ def lexicon(lang: str) -> Lexicon:
 
     suffixes = data.ordinal_suffixes
     sep = r"\s+" if data.meta.spaces else r"\s*"
-    regex: dict[str, str] = {}
-    for cls, table in words.items():
-        regex[cls] = "(?:" + trie_regex(sorted(table), sep) + ")" if table else "(?!)"
-    regex.update(REGEX_CLASSES)
-    if suffixes:
-        regex["day"] = REGEX_CLASSES["day"] + "(?:" + trie_regex(suffixes) + ")?(?!\\d)"
-    else:
-        regex["day"] = REGEX_CLASSES["day"] + "(?!\\d)"
-    num_words = regex.get("num")
-    regex["num"] = r"(?:\d{1,3}" + (f"|{num_words}" if num_words else "") + ")"
-    for cls in ("month", "month_wide", "month_abbr", "weekday", "weekday_abbr", "relday",
-                "dayperiod", "unit", "dir", "ordinal", "ordinal_half", "weekend", "to_date", "dayperiod_phrase"):
-        regex.setdefault(cls, "(?!)")
+    regex = Patterns(words, sep, tuple(suffixes))
 
     triggers: set[str] = set()
     for cls in TRIGGER_CLASSES:
@@ -236,7 +276,7 @@ def lexicon(lang: str) -> Lexicon:
         lang=lang,
         spaces=data.meta.spaces,
         words=MappingProxyType({k: MappingProxyType(v) for k, v in words.items()}),
-        regex=MappingProxyType(regex),
+        regex=regex,
         triggers=frozenset(triggers),
         ambiguous=data.ambiguous,
         not_temporal=data.not_temporal,
