@@ -71,6 +71,9 @@ class Meta(_Strict):
     spaces: bool = True
     case_marks_names: bool = False
     weekday_reading: Literal["nearest", "week"] = "nearest"
+    # Month and weekday names are written in lower case ("mars"): a capitalised ambiguous one
+    # mid-sentence is another word ("la mission vers Mars"), whatever cue stands before it.
+    lowercase_names: bool = False
     particles: tuple[str, ...] = ()  # case endings glued to a phrase ("지난주에", "haftaki")
     carrier: str = ""  # a short question with {} where a time phrase goes (conformance tests)
     sources: tuple[str, ...] = ()

@@ -10,6 +10,7 @@ from __future__ import annotations
 import re
 from dataclasses import replace
 
+from ..locale import load_locale
 from ..model import Candidate, Span
 from ..preparing import Prepared
 from .scanner import Scanner
@@ -53,6 +54,18 @@ def _is_name(prepared: Prepared, c: Candidate, scanner: Scanner) -> bool:
     lex = scanner.lexicons.get(c.lang)
     if lex is None or not lex.case_marks_names:
         return False
+    return _capitalised_mid_sentence(prepared, c)
+
+
+def _is_other_word(prepared: Prepared, c: Candidate) -> bool:
+    """In a language that writes month and weekday names in lower case, a capitalised
+    look-alike mid-sentence is another word (French "la mission vers Mars": the planet)."""
+    if not c.nameable or c.lang == "und" or not load_locale(c.lang).meta.lowercase_names:
+        return False
+    return _capitalised_mid_sentence(prepared, c)
+
+
+def _capitalised_mid_sentence(prepared: Prepared, c: Candidate) -> bool:
     start, _ = prepared.to_original(c.span.start, c.span.end)
     original = prepared.original
     if not original[start : start + 1].isupper():
@@ -92,6 +105,9 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
     glued_tails = conn.glued_tails
     while i < n:
         a = found[i]
+        if a.nameable and _is_other_word(prepared, a):
+            i += 1
+            continue
         # Cheap test first: is the word before the phrase the end of some connective?
         k = a.span.start - 1
         pre = None
