@@ -11,7 +11,7 @@ from ..preparing import Prepared
 from .combine import combine
 from .typos import typo_candidates
 from .forms import CANONICAL_SLOT
-from .lexicon import REGEX_CLASSES, is_word_char
+from .lexicon import REGEX_CLASSES, WORD, is_word_char
 from .scanner import Scanner, scanner_for
 
 if TYPE_CHECKING:
@@ -19,6 +19,8 @@ if TYPE_CHECKING:
 
 __all__ = ["scan", "scan_text", "scanner_for", "Scanner"]
 
+# A word in any script: letters, digits and the combining marks that continue them.
+_TOKEN = re.compile(f"{WORD}+")
 # The first two runs at a position: letters, digits, or one other character (see runs_key).
 _PAIR = re.compile(r"([^\W\d_]+|\d+|[^\w\s])\s*([^\W\d_]+|\d+|[^\w\s])?")
 
@@ -45,9 +47,62 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     return tuple(sorted(exact + fuzzy, key=lambda c: c.span.start))
 
 
+def _marks(text: str, scanner: Scanner) -> tuple[list[int], list[int]]:
+    """Positions of trigger words and of leading words, in one pass over the words of
+    ``text`` (set lookups: no expression over every word of every language to compile), plus
+    the expression of the languages written without spaces."""
+    hits: list[int] = []
+    leaders: list[int] = []
+    trig = scanner.trigger_words
+    lead = scanner.leader_words
+    endings = scanner.endings
+    for m in _TOKEN.finditer(text):
+        tok = m.group()
+        at = m.start()
+        if tok[0].isdigit():
+            prev = text[at - 1] if at else " "
+            # Not inside a number ("2025.1") or a ticket key ("WRN-2025": common practice).
+            if prev not in ".,:/#" and not (prev == "-" and at > 1 and text[at - 2].isalpha()):
+                hits.append(at)
+            continue
+        if tok in trig:
+            hits.append(at)
+            continue
+        if endings:
+            base = _without_ending(tok, endings)
+            if base is not None and base in trig:
+                hits.append(at)
+                continue
+        if tok in lead:
+            leaders.append(at)
+        elif not tok.isalpha():
+            for i, ch in enumerate(tok):
+                if ch.isdigit():
+                    hits.append(at + i)  # "q3", "w48"
+                    break
+    if scanner.unspaced_marks is not None:
+        for m in scanner.unspaced_marks.finditer(text):
+            (hits if m.lastgroup == "t" else leaders).append(m.start())
+        hits.sort()
+        leaders.sort()
+    return hits, leaders
+
+
+def _without_ending(tok: str, endings: tuple[str, ...]) -> str | None:
+    """``tok`` without one or two glued endings ("haftaki" -> "hafta", "지난주에는" -> "지난주")."""
+    for ending in endings:
+        if tok.endswith(ending) and len(tok) > len(ending):
+            base = tok[: -len(ending)].rstrip("'")
+            for second in endings:
+                if base.endswith(second) and len(base) > len(second):
+                    return base[: -len(second)].rstrip("'") or None
+            return base
+    return None
+
+
 def _scan_exact(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     text = prepared.text
-    hits = [m.start() for m in scanner.trigger.finditer(text)]
+    hits, leaders = _marks(text, scanner)
     if not hits:
         return ()
     # Forms start at a trigger, at the start of the word holding it ("q3"), or at a leading
@@ -68,7 +123,6 @@ def _scan_exact(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
             while k > 0 and text[k - 1].isalpha():
                 k -= 1
             positions.add(k)
-    leaders = [m.start() for m in scanner.leaders.finditer(text)]
     if leaders:
         back = scanner.lookback
         for hit in hits:

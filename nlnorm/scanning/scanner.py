@@ -22,7 +22,15 @@ from ..preparing import fold
 from .forms import Form, FormHead, compile_form, form_head, key_of
 from ..locale import POST_RELATIONS
 from .lexicon import TRIGGER_CLASSES
-from .lexicon import NO_WORD_AFTER, NO_WORD_BEFORE, Lexicon, is_word_char, lexicon, trie_regex
+from .lexicon import (
+    NO_WORD_AFTER,
+    NO_WORD_BEFORE,
+    WORD,
+    Lexicon,
+    is_word_char,
+    lexicon,
+    trie_regex,
+)
 
 __all__ = ["Scanner", "scanner_for", "cldr_forms"]
 
@@ -76,8 +84,10 @@ class Scanner:
     """
 
     languages: tuple[str, ...]
-    trigger: re.Pattern[str]
-    leaders: re.Pattern[str]
+    trigger_words: frozenset[str]  # time words of spaced languages, as words of a question
+    leader_words: frozenset[str]  # words that may start a form before a time word
+    endings: tuple[str, ...]  # glued endings and postpositions, longest first ("ki", "부터")
+    unspaced_marks: re.Pattern[str] | None  # triggers (group t) and leaders (group l)
     curated: Mapping[object, tuple["Pending", ...]]  # by first run only; compiled on use
     generated: Mapping[object, tuple["Pending", ...]]
     lexicons: Mapping[str, Lexicon]
@@ -156,6 +166,13 @@ class Pending:
         return found
 
 
+def _core(word: str) -> str:
+    """The longest run of word characters of ``word`` ("qtr." -> "qtr"), as a question's
+    words are split."""
+    runs = re.findall(f"{WORD}+", word)
+    return max(runs, key=len) if runs else ""
+
+
 def _root_lexicon(lexicons: Mapping[str, Lexicon]) -> Lexicon:
     """The lexicon of root forms (ISO notation): regex slots only, reported as "und"."""
     lex = next(iter(lexicons.values()))
@@ -230,6 +247,7 @@ def cldr_forms(lang: str) -> list[tuple[str, str, tuple[tuple[str, object], ...]
     out: list[tuple[str, str, tuple[tuple[str, object], ...]]] = []
     seen: set[str] = set()
     weekday_fields = cldr.WEEKDAY_FIELDS
+    week_words = {fold(w) for w in load_locale(lang).units.get("week", ())}
     for f in cldr.relative_fields(lang):
         text = fold(f.text).strip()
         if not text or any(c in text for c in "(){}~") or text in seen:
@@ -241,6 +259,8 @@ def cldr_forms(lang: str) -> list[tuple[str, str, tuple[tuple[str, object], ...]
             reading = {-1: "R14", 0: "R16", 1: "R15"}.get(f.offset)
             if reading is None:
                 continue
+            if week_words & set(text.split()):
+                reading = "R16"  # the field names the week itself ("volgende week maandag")
             fixed: tuple[tuple[str, object], ...] = (
                 ("weekday", weekday_fields.index(f.field)),
                 ("offset", f.offset),
@@ -421,35 +441,28 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
     spaced = [t for t in spaced if t not in quiet]
     unspaced = sorted({t for lex in lexicons.values() if not lex.spaces for t in lex.triggers}
                       | cldr_triggers[False] | extra_unspaced)
-    # A digit that does not continue a number ("2025.1" triggers once); written with the
-    # look-behind after the digit so that the regex engine can skip ahead by character class.
-    # Digits after a letter and a hyphen are a ticket key ("WRN-2025"), common practice in
-    # trackers, and never start a date.
-    parts = [r"\d(?<![\d.,:/#]\d)(?<![^\W\d_]-\d)"]
-    if spaced:
-        parts.append(f"{NO_WORD_BEFORE}{trie_regex(spaced)}{NO_WORD_AFTER}")
-    if unspaced:
-        parts.append(trie_regex(unspaced))
-    # Languages that glue endings and postpositions to words: a time word followed by one
-    # triggers too ("haftaki", "지난주에", "지난주부터").
+    # Spaced languages: words are looked up in sets, one pass over the question's words
+    # (digits that start a number trigger too; see scanning._marks). Languages written
+    # without spaces: one expression, since their words are not separated.
+    triggers = set(spaced) | set(unspaced)
+    trigger_words = {_core(t) for t in spaced} - {""}
+    endings: set[str] = set()
     for lang, lex in lexicons.items():
         if lex.spaces and (lex.particles or lex.glue):
-            words = sorted((set(lex.triggers) | lang_triggers[lang]) - quiet)
-            if not words:
-                continue
-            ends = f"(?:{trie_regex(lex.particles)})?" if lex.particles else ""
-            glue = f"(?={trie_regex(lex.glue)})|" if lex.glue else ""
-            parts.append(f"{NO_WORD_BEFORE}(?:{trie_regex(words)}){ends}(?:{glue}{NO_WORD_AFTER})")
-    trigger = re.compile("|".join(parts))
-    triggers = set(spaced) | set(unspaced)
-    spaced_leaders = sorted(w for w in leaders_spaced if w not in triggers)
+            endings |= set(lex.particles) | set(lex.glue)
+            trigger_words |= {_core(t) for t in lang_triggers[lang] - quiet}
+    leader_words = {_core(w) for w in leaders_spaced if w not in triggers} - trigger_words - {""}
     unspaced_leaders = sorted(w for w in leaders_unspaced if w not in triggers)
-    leader_rx = re.compile(_either(spaced_leaders, unspaced_leaders,
-                                   NO_WORD_BEFORE + "{}" + NO_WORD_AFTER, "{}"))
+    marks = None
+    if unspaced or unspaced_leaders:
+        marks = re.compile(_either(unspaced, [], "(?P<t>{})", "")
+                           + ("|(?P<l>" + trie_regex(unspaced_leaders) + ")" if unspaced_leaders else ""))
     return Scanner(
         languages=languages,
-        trigger=trigger,
-        leaders=leader_rx,
+        trigger_words=frozenset(trigger_words),
+        leader_words=frozenset(leader_words),
+        endings=tuple(sorted(endings, key=len, reverse=True)),
+        unspaced_marks=marks,
         curated=MappingProxyType({k: tuple(v) for k, v in curated.items()}),
         generated=MappingProxyType({k: tuple(v) for k, v in generated.items()}),
         lexicons=MappingProxyType(lexicons),
