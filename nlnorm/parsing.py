@@ -87,7 +87,7 @@ def numeric_date(text: str, order: str) -> tuple[DateRef | None, DateRef | None]
     >>> (a.month, a.day), (b.month, b.day)
     ((3, 4), (4, 3))
     """
-    sep = "/" if "/" in text else "."
+    sep = next((s for s in "/-" if s in text), ".")
     parts = [int(p) for p in text.split(sep)]
     if len(parts) != 3:
         return None, None

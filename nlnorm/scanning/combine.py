@@ -205,6 +205,12 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
             relation = next((r for r in ("since", "after", "before", "until") if r in pre_rel), None)
             deadline = "deadline" in pre_rel
             inner = _deadline(a) if deadline else a
+            if relation is not None and a.reading == "D":
+                # A length of time has no start or end to bound ("seit 3 Tagen"): the word
+                # vouches for it and stays in the question.
+                out.append(replace(a, weak=False))
+                i += 1
+                continue
             if relation is not None:
                 out.append(Candidate(Span(pre_start, a.span.end), lang, _BOUND[relation],
                                      connective=relation, parts=(inner,)))

@@ -8,6 +8,9 @@ with. Expected intervals come from the standard library and python-dateutil's re
 The calendar rule for a weekday field ("last Monday") follows the language's
 ``weekday_reading`` in its locale file: the nearest such day (R14/R15) or that day of the
 week before/after (R16) — common practice of the language's speakers, stated in the file.
+A weekday field whose text names the week itself (Dutch "volgende week maandag", "Monday of
+next week") is that day of that week, whatever the setting: the week word is one of the
+language's ``[units] week`` forms.
 The short question around each phrase is the locale file's ``carrier``.
 """
 
@@ -95,7 +98,8 @@ def wall_unit(instant: datetime, grain: str) -> tuple[datetime, datetime]:
     return floor, floor + size
 
 
-def expected(lang: str, reading: str, slots: dict, n: int | None) -> tuple[datetime, datetime] | str:
+def expected(lang: str, reading: str, slots: dict, n: int | None,
+             phrase: str = "") -> tuple[datetime, datetime] | str:
     today = NOW.date()
     if reading == "NOW":
         return "now"
@@ -105,8 +109,10 @@ def expected(lang: str, reading: str, slots: dict, n: int | None) -> tuple[datet
     if "weekday" in slots:  # last / this / next <weekday>
         wd, offset = int(slots["weekday"]), int(slots["offset"])
         week_reading = load_locale(lang).meta.weekday_reading
+        week_words = {w.lower() for w in load_locale(lang).units.get("week", ())}
+        names_week = bool(week_words & set(phrase.lower().split()))
         first, _ = calendar_period(today, "week")
-        if offset == 0 or week_reading == "week":
+        if offset == 0 or week_reading == "week" or names_week:
             d = first + timedelta(days=7 * offset + (wd - WS) % 7)
         elif offset < 0:
             d = today - timedelta(days=((today.weekday() - wd) % 7) or 7)
@@ -157,7 +163,7 @@ def test_cldr_phrase_of_the_language_means_what_cldr_says(lang, phrase, reading,
         pytest.skip("CLDR writes another plural form for this number")
     carrier = load_locale(lang).meta.carrier or "{}"
     ctx = Context(now=NOW, week_start="monday", languages=[lang])
-    want = expected(lang, reading, slots, n)
+    want = expected(lang, reading, slots, n, phrase)
     for question in (phrase, carrier.format(phrase)):
         m = mention_of(question, phrase, ctx)
         if want == "now":
