@@ -76,7 +76,11 @@ def _parser() -> argparse.ArgumentParser:
     be.add_argument("--compare", action=argparse.BooleanOptionalAction, default=True,
                     help="also time dateparser's search_dates on the same questions")
     be.add_argument("--compare-sample", type=int, default=2_000,
-                    help="questions given to search_dates (default 2000; it is slow)")
+                    help="English questions given to search_dates (default 2000; it is slow)")
+    be.add_argument("--mixed", action=argparse.BooleanOptionalAction, default=True,
+                    help="also run the mixed log in every deep language")
+    be.add_argument("--mixed-sample", type=int, default=300,
+                    help="mixed questions given to search_dates with every language (default 300)")
     sub.add_parser("schema", help="print the JSON Schema of the output")
     return p
 
@@ -131,7 +135,8 @@ def main(argv: Sequence[str] | None = None) -> int:
         if args.command == "bench":
             from .bench import run
 
-            return run(n=args.n, compare=args.compare, compare_sample=args.compare_sample)
+            return run(n=args.n, compare=args.compare, compare_sample=args.compare_sample,
+                       mixed=args.mixed, mixed_sample=args.mixed_sample)
         if args.command == "schema":
             from .schema import Result
 
