@@ -697,6 +697,8 @@ R23 = [
          weekend(first_open_weekend(TODAY)), f"{first_open_weekend(TODAY).isoformat()}/P{ru_weekend()[1]}D"),
     case("R23-ru-na-etih-vyhodnyh", "Деплои на этих выходных", "на этих выходных", "R23",
          weekend(first_open_weekend(TODAY))),
+    case("R23-ru-v-blizhajshie-vyhodnye-is-the-coming-one", "Работы в ближайшие выходные",
+         "в ближайшие выходные", "R23", weekend(first_open_weekend(TODAY))),
     case("R23-ru-na-proshlyh-vyhodnyh", "Алерты на прошлых выходных", "на прошлых выходных", "R23",
          weekend(last_ended_weekend(TODAY))),
     case("R23-ru-v-proshlye-vyhodnye", "Алерты в прошлые выходные", "в прошлые выходные", "R23",
@@ -913,6 +915,14 @@ TRAPS = [
     ("N-ru-segodnyashnij-reliz", "Сегодняшний релиз"),
     ("N-ru-posle-obeda", "После обеда созвон"),
     ("N-ru-zadacha-14", "Задача 14 у кого?"),
+    ("N-ru-zavtrak-is-no-typo-of-zavtra", "Завтрак в офисе в десять"),
+    ("N-ru-po-pyatnicam-recurring", "Созвоны по пятницам"),
+    ("N-ru-po-ponedelnikam-recurring", "Релизы по понедельникам"),
+    ("N-ru-proshlye-dni-plural-no-number", "Прошлые дни были тяжёлыми"),
+    ("N-ru-v-proshlye-gody-plural-no-number", "В прошлые годы было лучше"),
+    ("N-ru-v-blizhajshie-dni-plural-no-number", "Починим в ближайшие дни"),
+    ("N-ru-poslednie-nedeli-plural-no-number", "Последние недели были спокойными"),
+    ("N-ru-v-eti-dni", "В эти дни много багов"),
 ]
 
 
