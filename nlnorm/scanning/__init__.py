@@ -100,6 +100,17 @@ def _without_ending(tok: str, endings: tuple[str, ...]) -> str | None:
     return None
 
 
+def _elided_start(text: str, k: int) -> int | None:
+    """The start of an elided word glued by an apostrophe to the word at ``k`` ("d'" of
+    "d'ici"), or ``None``."""
+    if k > 1 and text[k - 1] == "'" and text[k - 2].isalpha():
+        k -= 1
+        while k > 0 and text[k - 1].isalpha():
+            k -= 1
+        return k
+    return None
+
+
 def _scan_exact(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     text = prepared.text
     hits, leaders = _marks(text, scanner)
@@ -118,11 +129,9 @@ def _scan_exact(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
                 k == 1 or not text[k - 2].isalnum()):
             positions.add(k - 1)
         # An elided word glued to it by an apostrophe starts a form too ("l'année", "dell'anno").
-        if k > 1 and text[k - 1] == "'" and text[k - 2].isalpha():
-            k -= 1
-            while k > 0 and text[k - 1].isalpha():
-                k -= 1
-            positions.add(k)
+        elided = _elided_start(text, k)
+        if elided is not None:
+            positions.add(elided)
     if leaders:
         back = scanner.lookback
         for hit in hits:
@@ -130,7 +139,11 @@ def _scan_exact(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
             j = k
             while j > 0 and hit - leaders[j - 1] <= back:
                 j -= 1
-            positions.update(leaders[j:k])
+            for lead in leaders[j:k]:
+                positions.add(lead)
+                elided = _elided_start(text, lead)  # "d'ici 3 jours": the word is "ici"
+                if elided is not None:
+                    positions.add(elided)
     found: list[Candidate] = []
     limit = 0
     pair = _PAIR.match
