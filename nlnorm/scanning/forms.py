@@ -234,7 +234,7 @@ _SLOT = re.compile(r"\{([a-z_0-9]+)\}")
 
 def form_head(source: str, lex: Lexicon) -> FormHead:
     """How ``source`` can start, read off its leading tokens without building its pattern."""
-    tokens = source.strip().lstrip("~").split()
+    tokens = _FIXED_PIECE.sub("", source).strip().lstrip("~").split()
     keys: set[str] = set()
     chars: set[str] = set()
     leaders: set[str] = set()

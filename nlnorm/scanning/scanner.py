@@ -19,7 +19,7 @@ from typing import Mapping
 from .. import cldr
 from ..locale import load_locale
 from ..preparing import fold
-from .forms import Form, FormHead, compile_form, form_head, key_of
+from .forms import _FIXED_PIECE, Form, FormHead, compile_form, form_head, key_of
 from ..locale import POST_RELATIONS
 from .lexicon import TRIGGER_CLASSES
 from .lexicon import (
@@ -225,7 +225,7 @@ def _literal_triggers(source: str) -> set[str]:
     else every word of its first choice that must be there ("(halbjahr|jahreshälfte)")."""
     plain: list[str] = []
     choices: list[list[str]] = []
-    for token in source.strip().lstrip("~").split():
+    for token in _FIXED_PIECE.sub("", source).strip().lstrip("~").split():
         if token.endswith("?") or "{" in token:
             continue
         if token.startswith("(") and token.endswith(")"):
