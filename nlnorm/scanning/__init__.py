@@ -231,7 +231,8 @@ def _candidate(m, form, scanner: Scanner, prepared: Prepared) -> Candidate:  # t
         slots.append((CANONICAL_SLOT.get(cls, cls), value))
     if not weak and m.start() > 0 and text_starts_digit(prepared.text, m.start()):
         prev = prepared.text[max(0, m.start() - 24) : m.start()].split()
-        if prev and prev[-1].strip(":#-") in lex.not_temporal:
+        # A word that is never followed by a date in any enabled language ("version 1.2.2020").
+        if prev and prev[-1].strip(":#-") in scanner.not_temporal:
             weak = True
     if not weak and m.start() > 0 and not lex.spaces and lex.not_temporal:
         # Without spaces the word is glued to the phrase: "每周一" (every Monday), "版本2025年".

@@ -88,6 +88,7 @@ class Scanner:
     leader_words: frozenset[str]  # words that may start a form before a time word
     endings: tuple[str, ...]  # glued endings and postpositions, longest first ("ki", "부터")
     unspaced_marks: re.Pattern[str] | None  # triggers (group t) and leaders (group l)
+    not_temporal: frozenset[str]  # words after which no number is a date, in any language
     curated: Mapping[object, tuple["Pending", ...]]  # by first run only; compiled on use
     generated: Mapping[object, tuple["Pending", ...]]
     lexicons: Mapping[str, Lexicon]
@@ -463,6 +464,7 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
         leader_words=frozenset(leader_words),
         endings=tuple(sorted(endings, key=len, reverse=True)),
         unspaced_marks=marks,
+        not_temporal=frozenset(w for lex in lexicons.values() for w in lex.not_temporal),
         curated=MappingProxyType({k: tuple(v) for k, v in curated.items()}),
         generated=MappingProxyType({k: tuple(v) for k, v in generated.items()}),
         lexicons=MappingProxyType(lexicons),
