@@ -25,12 +25,17 @@ from typing import Any
 from zoneinfo import ZoneInfo
 
 import pytest
-from babel import Locale
-from dateutil.relativedelta import FR, MO, SA, SU, TH, TU, WE, relativedelta
+from dateutil.relativedelta import FR, MO, SA, SU, TH, TU, WE
 
-from nlnorm import Context, normalize
 from nlnorm.locale import load_locale
 from tests.helpers import BERLIN, NOW, TODAY
+from tests.locales.slavic_oracles import (
+    BEFORE_LEAP_DAY, CAL as _CAL, FUT as _FUT, JANUARY_END, LEAP_DAY, MID_JANUARY, MONDAY_AFTER,
+    MONTH_END, NEAREST as _NEAREST, PARAMS, PAST as _PAST, QUARTER_PAST, ROLL as _ROLL, SATURDAY,
+    SPRING_BERLIN, SUNDAY, WEEK as _WEEK, D, Runner, all_cases, case, check_tables, first_weekday,
+    other_order_policy,
+)
+from tests.locales import slavic_oracles as so
 from tests.resolution.test_readings_en import (
     _cal_ahead,
     _cal_back,
@@ -47,7 +52,6 @@ from tests.resolution.test_readings_en import (
     iso_week,
     iso_week_name,
     joined,
-    midnight,
     month,
     month_of,
     most_recent_year,
@@ -70,119 +74,50 @@ from tests.resolution.test_readings_en import (
     year,
 )
 
+LOCALE = "ru"
+RU = Runner("ru", LOCALE)
 MOSCOW = ZoneInfo("Europe/Moscow")
-D = relativedelta
-WEEKDAYS = (MO, TU, WE, TH, FR, SA, SU)
-LANGS = ("ru",)
-
-# --- clocks (fixed; NOW is Wednesday 2026-12-02 10:00 in Berlin) ------------------------------
-SATURDAY = datetime(2026, 12, 5, 10, 0, tzinfo=BERLIN)
-SUNDAY = datetime(2026, 12, 6, 10, 0, tzinfo=BERLIN)
-MONDAY_AFTER = datetime(2026, 12, 7, 10, 0, tzinfo=BERLIN)
-MONTH_END = datetime(2026, 3, 31, 10, 0, tzinfo=BERLIN)
-JANUARY_END = datetime(2026, 1, 31, 10, 0, tzinfo=BERLIN)
-LEAP_DAY = datetime(2028, 2, 29, 10, 0, tzinfo=BERLIN)
-MID_JANUARY = datetime(2027, 1, 15, 10, 0, tzinfo=BERLIN)
-BEFORE_LEAP_DAY = datetime(2027, 2, 1, 10, 0, tzinfo=BERLIN)
-#: Berlin clocks went 02:00 -> 03:00 on 2026-03-29 (tzdata).
-SPRING_BERLIN = datetime(2026, 3, 29, 12, 0, tzinfo=BERLIN)
-QUARTER_PAST = datetime(2026, 12, 2, 10, 17, tzinfo=BERLIN)
 #: Wednesday 2 December 2026, 10:00 in Moscow; Sunday 1 March 2026, 10:00 in Moscow.
 MOSCOW_NOW = datetime(2026, 12, 2, 10, 0, tzinfo=MOSCOW)
 MOSCOW_MARCH_FIRST = datetime(2026, 3, 1, 10, 0, tzinfo=MOSCOW)
-
-_RU = Locale.parse("ru")
-_RU_RULES = _RU.day_period_rules[None]
-_CAL = "window_reading=calendar"
-_ROLL = "window_reading=rolling"
-_FUT = "bias=future"
-_PAST = "bias=past"
-_WEEK = "weekday_reading=week"
-_NEAREST = "weekday_reading=nearest"
-
-
-# --- oracles for Russian ----------------------------------------------------------------------
+_RU_FIRST = first_weekday(LOCALE)
 
 
 def period(d: date, pid: str, tz: ZoneInfo = BERLIN) -> tuple[str, str]:
-    """CLDR 49 Russian day period ``pid`` of local date ``d``, from babel's
-    ``Locale("ru").day_period_rules``; a rule whose end is not after its start (ночь,
-    22:00-04:00) ends on the next day."""
-    rule = _RU_RULES[pid][0]
-    start = midnight(d, tz) + D(seconds=rule["from"])
-    end_day = d if rule["before"] > rule["from"] else d + D(days=1)
-    return iso(start), iso(midnight(end_day, tz) + D(seconds=rule["before"]))  # type: ignore[return-value]
+    return so.period(LOCALE, d, pid, tz)
 
 
 def ru_weekend() -> tuple[Any, int]:
-    """First weekend day and number of weekend days of the territory RU (CLDR via babel)."""
-    return WEEKDAYS[_RU.weekend_start], (_RU.weekend_end - _RU.weekend_start) % 7 + 1
+    return so.weekend_days(LOCALE)
 
 
 def weekend(first: date) -> tuple[str, str]:
-    return span(first, first + D(days=ru_weekend()[1]))
+    return so.weekend(LOCALE, first)
 
 
 def last_ended_weekend(today: date) -> date:
-    first, length = ru_weekend()
-    return today + D(days=-length, weekday=first(-1))
+    return so.last_ended_weekend(LOCALE, today)
 
 
 def first_open_weekend(today: date) -> date:
-    first, length = ru_weekend()
-    return today + D(days=-(length - 1), weekday=first(+1))
-
-
-_RU_FIRST = WEEKDAYS[_RU.first_week_day]
+    return so.first_open_weekend(LOCALE, today)
 
 
 def ru_week(d: date) -> tuple[str, str]:
-    """The week holding ``d``, starting on the CLDR first day of the week of RU."""
-    return week(d, _RU_FIRST)
+    return so.locale_week(LOCALE, d)
 
 
 def read_ru(a: int, b: int, y: int) -> date:
-    """``a.b.y`` read in the CLDR order of ``ru``."""
-    return date(y, a, b) if numeric_order("ru") == "MD" else date(y, b, a)
-
-
-_OTHER_ORDER = {"MD": "date_order=DMY", "DM": "date_order=MDY"}
-
-
-# --- tables -----------------------------------------------------------------------------------
-
-
-def case(id: str, question: str, phrase: str, reading: str, bounds: tuple[str | None, str | None],
-         value: str | None = None, alts: tuple = (), **context: Any) -> Any:
-    return pytest.param(question, phrase, reading, bounds, value, alts, context, id=id)
-
-
-def run(question: str, **context: Any):  # type: ignore[no-untyped-def]
-    now = context.pop("now", NOW)
-    fields = {"languages": LANGS, "locale": "ru", **context}
-    if "tz" not in fields:
-        fields["tz"] = str(now.tzinfo)
-    return normalize(question, Context.at(now, **fields))
+    return so.read_numeric(LOCALE, a, b, y)
 
 
 def one(question: str, **context: Any):  # type: ignore[no-untyped-def]
-    result = run(question, **context)
-    assert len(result.mentions) == 1, (question, [m.text for m in result.mentions])
-    return result.mentions[0]
+    return RU.one(question, **context)
 
 
-def check(question, phrase, reading, bounds, value, alts, context) -> None:  # type: ignore[no-untyped-def]
-    m = one(question, **context)
-    assert m.text == phrase
-    assert m.lang == "ru" or m.lang == "und"
-    assert m.reading == reading
-    assert (m.start, m.end) == bounds
-    if value is not None:
-        assert m.value == value
-    assert tuple((a.reading, a.policy, a.start, a.end) for a in m.alternatives) == alts
+def run(question: str, **context: Any):  # type: ignore[no-untyped-def]
+    return RU.run(question, **context)
 
-
-PARAMS = ("question", "phrase", "reading", "bounds", "value", "alts", "context")
 
 R1 = [
     case("R1-ru-vchera", "Какие баги закрыли вчера?", "вчера", "R1", day(TODAY + D(days=-1)),
@@ -583,16 +518,16 @@ R18 = [
          day(date(2025, 3, 14))),
     case("R18-ru-numeric-ambiguous-CLDR-order", "Исправлено 03.04.2026", "03.04.2026", "R18",
          day(_RU_03_04), _RU_03_04.isoformat(),
-         alts=(alt("R18", _OTHER_ORDER[numeric_order("ru")], day(_SWAP[_RU_03_04])),)),
+         alts=(alt("R18", other_order_policy(LOCALE), day(_SWAP[_RU_03_04])),)),
     case("R18-ru-numeric-date-order-policy-MDY", "Исправлено 03.04.2026", "03.04.2026", "R18",
          day(date(2026, 3, 4)), alts=(alt("R18", "date_order=DMY", day(date(2026, 4, 3))),),
          date_order="MDY"),
     case("R18-ru-numeric-only-one-valid-reading", "Исправлено 13.04.2026", "13.04.2026", "R18",
          day(date(2026, 4, 13))),
     case("R18-ru-numeric-two-digit-year", "Исправлено 03.04.26", "03.04.26", "R18", day(_RU_03_04),
-         alts=(alt("R18", _OTHER_ORDER[numeric_order("ru")], day(_SWAP[_RU_03_04])),)),
+         alts=(alt("R18", other_order_policy(LOCALE), day(_SWAP[_RU_03_04])),)),
     case("R18-ru-numeric-slashes-day-first", "Исправлено 3/4/2026", "3/4/2026", "R18", day(_RU_03_04),
-         alts=(alt("R18", _OTHER_ORDER[numeric_order("ru")], day(_SWAP[_RU_03_04])),)),
+         alts=(alt("R18", other_order_policy(LOCALE), day(_SWAP[_RU_03_04])),)),
 ]
 
 R19 = [
@@ -729,15 +664,8 @@ TABLES = {"R1": R1, "R2": R2, "R3": R3, "R4": R4, "R5": R5, "R6": R6, "R7": R7, 
 DEEP = {"R5", "R11", "R12", "R13", "R14", "R15", "R16", "R18", "R22", "R23"}
 
 
-def _all_cases() -> list[Any]:
-    return [pytest.param(*p.values, id=p.id) for table in TABLES.values() for p in table]
-
-
 def test_every_reading_has_worked_russian_examples() -> None:
-    assert sorted(TABLES, key=lambda r: int(r[1:])) == [f"R{i}" for i in range(1, 24)]
-    for rid, table in TABLES.items():
-        assert len(table) >= (5 if rid in DEEP else 3), rid
-        assert all(p.id.startswith(f"{rid}-ru-") for p in table), rid
+    check_tables(TABLES, "ru", DEEP)
 
 
 def test_the_clocks_and_CLDR_facts_the_tables_use() -> None:
@@ -749,21 +677,15 @@ def test_the_clocks_and_CLDR_facts_the_tables_use() -> None:
     assert MOSCOW_NOW.utcoffset() == MOSCOW_MARCH_FIRST.utcoffset()
 
 
-@pytest.mark.parametrize(PARAMS, _all_cases())
+@pytest.mark.parametrize(PARAMS, all_cases(TABLES))
 def test_russian_phrase_resolves_to_its_interval(question, phrase, reading, bounds, value, alts, context):
-    check(question, phrase, reading, bounds, value, alts, context)
+    RU.check(question, phrase, reading, bounds, value, alts, context)
 
 
-@pytest.mark.parametrize(PARAMS, _all_cases())
+@pytest.mark.parametrize(PARAMS, all_cases(TABLES))
 def test_every_russian_alternative_names_a_policy_that_selects_it_or_none(
         question, phrase, reading, bounds, value, alts, context):
-    m = one(question, **context)
-    for a in m.alternatives:
-        if a.policy is None:
-            continue
-        key, _, setting = a.policy.partition("=")
-        chosen = one(question, **{**context, key: setting})
-        assert (chosen.start, chosen.end) == (a.start, a.end), a.policy
+    RU.alternatives_are_selected_by_their_policy(question, context)
 
 
 def test_the_locale_file_reads_last_weekday_as_that_day_of_last_week() -> None:
@@ -815,15 +737,7 @@ POLICY_FLIPS = [
 @pytest.mark.parametrize(("question", "base", "setting"), [p[1:] for p in POLICY_FLIPS],
                          ids=[p[0] for p in POLICY_FLIPS])
 def test_a_policy_flips_the_russian_reading_and_the_old_one_becomes_the_alternative(question, base, setting):
-    key, new, old = setting
-    before_ = one(question, **base)
-    after_ = one(question, **base, **{key: new})
-    offered = [a for a in before_.alternatives if a.policy == f"{key}={new}"]
-    assert len(offered) == 1
-    assert (after_.start, after_.end, after_.reading) == (offered[0].start, offered[0].end, offered[0].reading)
-    assert (after_.start, after_.end) != (before_.start, before_.end)
-    back = [a for a in after_.alternatives if a.policy == f"{key}={old}"]
-    assert [(a.start, a.end, a.reading) for a in back] == [(before_.start, before_.end, before_.reading)]
+    RU.policy_flips(question, base, setting)
 
 
 # --- Russian and English in one question -------------------------------------------------------
@@ -879,6 +793,8 @@ TRAPS = [
     ("N-ru-v-srede-razrabotki", "Баги в среде разработки"),
     ("N-ru-Marta-name", "Марта закрыла пять задач"),
     ("N-ru-Maya-name", "Мая посмотрит ревью"),
+    ("N-ru-Mayu-name-capitalised-mid-sentence", "Назначь ревью на Маю"),
+    ("N-ru-Mae-name-capitalised-mid-sentence", "Отчёт о Мае готов"),
     ("N-ru-vtoroj-ordinal", "Второй билд упал"),
     ("N-ru-vtoraya-ordinal", "Вторая задача в списке"),
     ("N-ru-pervyj-kommit", "Первый коммит в репозитории"),
