@@ -21,6 +21,9 @@ __all__ = ["scan", "scan_text", "scanner_for", "Scanner"]
 
 # A word in any script: letters, digits and the combining marks that continue them.
 _TOKEN = re.compile(f"{WORD}+")
+# A number right after a letter that is not a Latin one ("到2025", "以来3"), in languages written
+# without spaces; Latin letters before digits make ticket keys and versions ("v2", "q3").
+_GLUED_NUMBER = re.compile(r"(?<=[^\W\d_])(?<![a-zA-Z])\d")
 # The first two runs at a position: letters, digits, or one other character (see runs_key).
 _PAIR = re.compile(r"([^\W\d_]+|\d+|[^\w\s])\s*([^\W\d_]+|\d+|[^\w\s])?")
 
@@ -83,6 +86,8 @@ def _marks(text: str, scanner: Scanner) -> tuple[list[int], list[int]]:
     if scanner.unspaced_marks is not None:
         for m in scanner.unspaced_marks.finditer(text):
             (hits if m.lastgroup == "t" else leaders).append(m.start())
+        # A number glued after a word of a script written without spaces ("到2025-03-31").
+        hits.extend(m.start() for m in _GLUED_NUMBER.finditer(text))
         hits.sort()
         leaders.sort()
     return hits, leaders
