@@ -71,11 +71,9 @@ def _marks(text: str, scanner: Scanner) -> tuple[list[int], list[int]]:
         if tok in trig:
             hits.append(at)
             continue
-        if endings:
-            base = _without_ending(tok, endings)
-            if base is not None and base in trig:
-                hits.append(at)
-                continue
+        if endings and any(base in trig for base in _without_ending(tok, endings)):
+            hits.append(at)
+            continue
         if tok in lead:
             leaders.append(at)
         elif not tok.isalpha():
@@ -93,16 +91,21 @@ def _marks(text: str, scanner: Scanner) -> tuple[list[int], list[int]]:
     return hits, leaders
 
 
-def _without_ending(tok: str, endings: tuple[str, ...]) -> str | None:
-    """``tok`` without one or two glued endings ("haftaki" -> "hafta", "지난주에는" -> "지난주")."""
+def _without_ending(tok: str, endings: tuple[str, ...]) -> set[str]:
+    """``tok`` without one or two glued endings ("haftaki" -> "hafta", "지난주에는" -> "지난주"),
+    every way the endings can be cut off ("haftada" is "hafta" + "da", not "haft" + "a" + "da")."""
+    out: set[str] = set()
     for ending in endings:
         if tok.endswith(ending) and len(tok) > len(ending):
             base = tok[: -len(ending)].rstrip("'")
+            if base:
+                out.add(base)
             for second in endings:
                 if base.endswith(second) and len(base) > len(second):
-                    return base[: -len(second)].rstrip("'") or None
-            return base
-    return None
+                    rest = base[: -len(second)].rstrip("'")
+                    if rest:
+                        out.add(rest)
+    return out
 
 
 def _elided_start(text: str, k: int) -> int | None:

@@ -148,8 +148,9 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
         if _has_day(a):
             m = conn.day_end.match(text, a.span.end)
             join = _group(m, "j", "j2") if m is not None else None
+            closing = _closing(scanner, text, m.end(), a.lang) if m is not None else None
             if m is not None and (join is None or not _is_and(scanner, join, a.lang)
-                                  or "between" in pre_rel):
+                                  or "between" in pre_rel or closing is not None):
                 year = int(m.group("y")) if m.group("y") else a.slot("year")
                 first = _with(a, year=year)
                 last = Candidate(
@@ -157,7 +158,7 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
                     _slots(a, day=int(_group(m, "d", "d2") or 0), year=year),
                 )
                 start = pre_start if pre_rel & {"between", "from"} else a.span.start
-                out.append(_range(first, last, start, m.end(), pre_word, scanner))
+                out.append(_range(first, last, start, closing or m.end(), pre_word, scanner))
                 i += 1
                 continue
             m = conn.day_start.search(text, max(0, a.span.start - 40), a.span.start)
@@ -165,7 +166,9 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
                 pre2 = m.group("pre")
                 pre2_rel = _relations(scanner, pre2, a.lang) if pre2 else frozenset()
                 j = m.group("j")
-                if j is None or not _is_and(scanner, j, a.lang) or "between" in pre2_rel:
+                closing = _closing(scanner, text, a.span.end, a.lang)
+                if j is None or not _is_and(scanner, j, a.lang) or "between" in pre2_rel \
+                        or closing is not None:
                     first = Candidate(
                         Span(m.start("d"), m.start("d") + len(m.group("d"))), a.lang, a.reading,
                         _slots(a, day=int(m.group("d"))),
@@ -173,7 +176,7 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
                     start = m.start("pre") if pre2_rel & {"between", "from"} else m.start("d")
                     if out and out[-1].span.end > start:
                         start = m.start("d")
-                    out.append(_range(first, a, start, a.span.end, pre2, scanner))
+                    out.append(_range(first, a, start, closing or a.span.end, pre2, scanner))
                     i += 1
                     continue
 
@@ -235,6 +238,15 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
         out.append(replace(a, weak=False) if a.weak else a)
         i += 1
     return tuple(out)
+
+
+def _closing(scanner: Scanner, text: str, end: int, lang: str) -> int | None:
+    """The end of a word after a range that closes it ("1-15 Mart arasında"), if there is one."""
+    post = scanner.connectives.suffix.match(text, end)
+    if post is None:
+        return None
+    word = _group(post, "s", "s2") or ""
+    return post.end() if "between_post" in _relations(scanner, word, lang) else None
 
 
 def _ends_with_join(conn, text: str, a: Candidate) -> bool:  # type: ignore[no-untyped-def]

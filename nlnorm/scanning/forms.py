@@ -238,14 +238,20 @@ def form_head(source: str, lex: Lexicon) -> FormHead:
     keys: set[str] = set()
     chars: set[str] = set()
     leaders: set[str] = set()
-    for token in tokens:
+    # An ending or a glued postposition continues the word a match ends with ("dünkü",
+    # "지난주부터"): a token that may end the form starts runs with those endings too.
+    endings = tuple(lex.particles) + tuple(g.split()[0] for g in lex.glue if g.split()) \
+        if lex.spaces and (lex.particles or lex.glue) else ()
+    for i, token in enumerate(tokens):
         optional = token.endswith("?") and len(token) > 1
         body = token[:-1] if optional else token
+        words: list[str] = []
         if body.startswith("(") and body.endswith(")") and "{" not in body:
             options = [fold(o) for o in body[1:-1].split("|") if o]
             keys |= {key_of(o) for o in options}
             chars |= {o[0] for o in options}
             leaders |= {o for o in options if o[0].isalpha()}
+            words = options
         else:
             m = _TOKEN_PIECE.match(body)
             if m is None:
@@ -262,6 +268,7 @@ def form_head(source: str, lex: Lexicon) -> FormHead:
                 keys |= info.keys
                 chars |= info.firsts
                 leaders |= info.leaders
+                words = list(info.samples) if m.end() == len(body) else []
             elif literal:
                 lowered = fold(literal)
                 keys.add(key_of(lowered))
@@ -269,6 +276,9 @@ def form_head(source: str, lex: Lexicon) -> FormHead:
                 word = re.match(r"\w+", lowered)
                 if word and word.end() == len(lowered) and m.end() == len(body):
                     leaders.add(lowered)
+                    words = [lowered]
+        if endings and words and all(t.endswith("?") and len(t) > 1 for t in tokens[i + 1:]):
+            keys |= {key_of(w + e) for w in words for e in endings}
         if not optional:
             break
     return FormHead(frozenset(keys), frozenset(chars), frozenset(leaders),
