@@ -195,7 +195,7 @@ class LocaleData:
         self.numbers = merged("numbers")
         self.ordinals = merged("ordinals")
         self.ordinal_suffixes = tuple(
-            dict.fromkeys(s for f in files for s in f.ordinal_suffixes.suffixes)
+            dict.fromkeys(fold(s) for f in files for s in f.ordinal_suffixes.suffixes)
         )
         self.units = merged("units")
         self.direction = merged("direction")
