@@ -23,14 +23,32 @@ _SENTENCE_END = re.compile(r"(?:^|[.!?:;\"'(\[]\s*)$")
 _PREV_WORD = re.compile(r"(\w+)\W*$")
 
 
+#: What a short connective of another language may do to a phrase: join it, which keeps its
+#: meaning. One- and two-letter function words of one language are often plain words of another
+#: ("what to do tomorrow": Polish "do" is "until"), so as a bound, range or deadline they bind
+#: only phrases of their own language and ISO notation ("und"); longer ones ("since letzten
+#: Montag") and the glued words of languages written without spaces bind any phrase. No
+#: connective of another language vouches for a weak phrase ("we may": Polish "we" is "in").
+_ACROSS_LANGUAGES = frozenset({"within", "on_day", "cue"})
+
+
 def _relations(scanner: Scanner, phrase: str, lang: str) -> frozenset[str]:
-    table = scanner.connectives.relations.get(" ".join(phrase.split()), {})
+    key = " ".join(phrase.split())
+    table = scanner.connectives.relations.get(key, {})
     if lang in table:
         return table[lang]
     merged: set[str] = set()
     for rels in table.values():
         merged |= rels
+    if lang != "und" and len(key) < 3 and merged and not any(
+            not scanner.lexicons[other].spaces for other in table if other in scanner.lexicons):
+        merged &= _ACROSS_LANGUAGES
     return frozenset(merged)
+
+
+def _foreign(scanner: Scanner, phrase: str, lang: str) -> bool:
+    """Whether the connective ``phrase`` belongs to another language than a phrase of ``lang``."""
+    return lang != "und" and lang not in scanner.connectives.relations.get(" ".join(phrase.split()), {})
 
 
 def _connective_lang(scanner: Scanner, phrase: str, lang: str) -> str:
@@ -127,10 +145,10 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
             gap = conn.join.fullmatch(text, a.span.end, b.span.start)
             # The join may be the ending of the first phrase itself, with only white space to
             # the second: Turkish "Mart'tan Nisan'a kadar".
-            ending = gap is None and _ends_with_join(conn, text, a) and \
-                not text[a.span.end:b.span.start].strip()
-            if gap is not None or ending:
-                word = _group(gap, "j", "j2") if gap is not None else None
+            ending = _ends_with_join(conn, text, a) if gap is None and \
+                not text[a.span.end:b.span.start].strip() else None
+            if gap is not None or ending is not None:
+                word = _group(gap, "j", "j2") if gap is not None else ending
                 needs_between = word is not None and _is_and(scanner, word, a.lang)
                 end = b.span.end
                 post = conn.suffix.match(text, end)
@@ -202,8 +220,10 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
             i += 1
             continue
 
-        # A single connective before the phrase.
-        if pre_rel:
+        # A single connective before the phrase (one of another language does not vouch for a
+        # weak word such as "mai"; a bare number such as a year has no language).
+        if pre_rel and not (a.weak and _foreign(scanner, pre_word or "", a.lang)
+                            and any(ch.isalpha() for ch in text[a.span.start:a.span.end])):
             lang = _connective_lang(scanner, pre_word or "", a.lang)
             relation = next((r for r in ("since", "after", "before", "until") if r in pre_rel), None)
             deadline = "deadline" in pre_rel
@@ -241,20 +261,21 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
 
 
 def _closing(scanner: Scanner, text: str, end: int, lang: str) -> int | None:
-    """The end of a word after a range that closes it ("1-15 Mart arasında"), if there is one."""
+    """The end of a word after a range that closes it ("1-15 Mart arasında", "1日から15日まで"),
+    if there is one."""
     post = scanner.connectives.suffix.match(text, end)
     if post is None:
         return None
     word = _group(post, "s", "s2") or ""
-    return post.end() if "between_post" in _relations(scanner, word, lang) else None
+    return post.end() if _relations(scanner, word, lang) & {"between_post", "until_post"} else None
 
 
-def _ends_with_join(conn, text: str, a: Candidate) -> bool:  # type: ignore[no-untyped-def]
-    """Whether the phrase ``a`` ends with a range join of its language written as an ending
-    (languages with particles: the Turkish ablative "Mart'tan")."""
+def _ends_with_join(conn, text: str, a: Candidate) -> str | None:  # type: ignore[no-untyped-def]
+    """The range join of its language that the phrase ``a`` ends with, written as an ending
+    (languages with particles: the Turkish ablative "Mart'tan", Korean "3월과"), if any."""
     endings = conn.join_endings.get(a.lang, ())
     phrase = text[a.span.start : a.span.end]
-    return any(len(phrase) > len(e) and phrase.endswith(e) for e in endings)
+    return next((e for e in endings if len(phrase) > len(e) and phrase.endswith(e)), None)
 
 
 def _before_spaces(text: str, k: int) -> str:
