@@ -2,6 +2,8 @@
 
 One edit (a letter left out, added, changed, or two neighbours swapped) on a time word of six
 or more letters in a language written with spaces: "yesterdy", "letze Woche", "wendesday".
+A corrected word shorter than eight letters counts only inside a phrase that also holds a word
+spelt right ("letze Woche"): alone, such a word is too often a real word of another language.
 The question is scanned again with the word corrected; a phrase found only that way gets a
 lower ``confidence`` and a note saying how the word was read. A correction never turns a known
 word into a time word, never yields a weak phrase, and never touches ambiguous or quiet words
@@ -137,6 +139,24 @@ def corrections(text: str, index: TypoIndex, taken: list[Span]) -> list[tuple[in
     return out
 
 
+#: A corrected word this long may stand alone as a phrase ("yesterdy", "wendesday").
+LONG = 8
+
+
+def _vouched(text: str, start: int, end: int, covered: list[tuple[int, int, str]]) -> bool:
+    """Whether a phrase found after correcting typos is trustworthy: it holds a word or number
+    spelt right besides the corrected ones ("letze Woche"), or every correction is a long word.
+    A short word alone is too often a real word of another language ("Sorgen", "mogen" are one
+    edit from "morgen")."""
+    if all(len(word) >= LONG for _, _, word in covered):
+        return True
+    rest = list(text[start:end])
+    for s, e, _ in covered:
+        for i in range(s - start, e - start):
+            rest[i] = " "
+    return any(ch.isalnum() for ch in rest)
+
+
 def corrected(prepared: Prepared, fixes: list[tuple[int, int, str]]) -> tuple[Prepared, list[int]]:
     """The prepared text with each word replaced, and for every character of the new text the
     index of the character of ``prepared.text`` it stands for (plus one entry for the end)."""
@@ -190,6 +210,8 @@ def typo_candidates(prepared: Prepared, scanner: "Scanner", exact: tuple[Candida
         covered = [f for f in fixes if back[c.span.start] <= f[0] and f[1] <= back[c.span.end - 1] + 1]
         if not covered or any(e.span.start < back[c.span.end - 1] + 1 and back[c.span.start] < e.span.end
                               for e in exact):
+            continue
+        if not _vouched(prepared.text, back[c.span.start], back[c.span.end - 1] + 1, covered):
             continue
         note = ", ".join(f"{prepared.text[s:e]!r} read as {w!r}" for s, e, w in covered)
         out.append(mapped(c, back, note))

@@ -74,3 +74,18 @@ def test_exact_phrases_keep_full_confidence_beside_a_typo():
 ])
 def test_words_that_only_look_like_typos_give_no_mention(question):
     assert run(question, **EN).mentions == ()
+
+
+@pytest.mark.parametrize("question", [
+    "keine Sorgen wegen der Tickets",  # German "Sorgen" is one edit from "morgen"
+    "wir mogen das ticket sluiten",     # Dutch "mogen" (may) is one edit from "morgen"
+    "volgens mij is het klaar",        # Dutch "volgens" (according to) vs "volgend"
+])
+def test_a_short_real_word_of_another_language_is_not_read_as_a_typo(question):
+    # A corrected word under eight letters counts only beside a word spelt right.
+    assert run(question).mentions == ()
+
+
+def test_a_short_typo_counts_beside_a_word_spelt_right():
+    m = one("Fehler der letze Woche", languages=["de"])
+    assert (m.value, m.confidence) == ("2026-W48", CONFIDENCE)
