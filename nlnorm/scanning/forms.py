@@ -268,7 +268,6 @@ def form_head(source: str, lex: Lexicon) -> FormHead:
                 keys |= info.keys
                 chars |= info.firsts
                 leaders |= info.leaders
-                words = list(info.samples) if m.end() == len(body) else []
             elif literal:
                 lowered = fold(literal)
                 keys.add(key_of(lowered))
@@ -276,7 +275,20 @@ def form_head(source: str, lex: Lexicon) -> FormHead:
                 word = re.match(r"\w+", lowered)
                 if word and word.end() == len(lowered) and m.end() == len(body):
                     leaders.add(lowered)
-                    words = [lowered]
+            # The texts the whole token can be: a slot glued to a word makes one run of
+            # letters in scripts such as Hangul ("{dir}주" is "지난주").
+            words = [""]
+            for piece in _TOKEN_PIECE.finditer(body):
+                p_cls, p_choice, p_literal = piece.group(1), piece.group(2), piece.group(3)
+                if p_choice is not None:
+                    texts = [fold(o) for o in p_choice.split("|") if o]
+                elif p_cls:
+                    texts = list(_class_info(lex, p_cls).samples) if p_cls in lex.regex else [""]
+                else:
+                    texts = [fold(p_literal)]
+                words = [a + b for a in words for b in texts][:_MAX_SAMPLES]
+            words = [w for w in words if w]
+            keys |= {key_of(w) for w in words}
         if endings and words and all(t.endswith("?") and len(t) > 1 for t in tokens[i + 1:]):
             keys |= {key_of(w + e) for w in words for e in endings}
         if not optional:

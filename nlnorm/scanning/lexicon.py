@@ -284,5 +284,6 @@ def lexicon(lang: str) -> Lexicon:
         ordinal_suffixes=tuple(suffixes),
         particles=tuple(fold(p) for p in data.meta.particles),
         glue=tuple(sorted({fold(w) for rel, words in data.connectives.items()
-                           if rel in POST_RELATIONS for w in words})) if data.meta.particles else (),
+                           if rel in POST_RELATIONS or rel in ("range_join", "between_join")
+                           for w in words})) if data.meta.particles else (),
     )

@@ -35,6 +35,11 @@ from .lexicon import (
 __all__ = ["Scanner", "scanner_for", "cldr_forms"]
 
 
+#: Relations whose words a language with particles may glue to the phrase before them:
+#: postpositions ("지난주부터") and the joins of a range ("3월과 5월 사이").
+_GLUED_AFTER = POST_RELATIONS | {"range_join", "between_join"}
+
+
 @dataclass(frozen=True, slots=True)
 class Connectives:
     """Connective words of the enabled languages, as expressions and lookups."""
@@ -191,7 +196,9 @@ def _cheap_first(source: str, lex: Lexicon) -> set[str]:
     if lex.spaces:
         if text.startswith("{num}"):
             return {"#1", "#2", "#3"} | {key_of(w) for w in lex.words.get("num", {})}
-        return {key_of(text)}
+        # An ending or a glued postposition may continue a one-word phrase ("지난주에").
+        endings = tuple(lex.particles) + tuple(g.split()[0] for g in lex.glue if g.split())
+        return {key_of(text)} | {key_of(text + e) for e in endings}
     if text.startswith("{num}"):
         return {"c:" + d for d in "0123456789"} | {"c:" + w[0] for w in lex.words.get("num", {}) if w}
     return {"c:" + text[0]}
@@ -316,8 +323,8 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
         for relation, phrases in data.connectives.items():
             for phrase in phrases:
                 key = " ".join(fold(phrase).split())
-                if unspaced or relation in POST_RELATIONS and data.meta.particles:
-                    glued.add(key)
+                if unspaced or relation in _GLUED_AFTER and data.meta.particles:
+                    glued.add(key)  # written after a phrase, with or without a space
                 if not key[:1].isalnum() or key[-1:] == "'":
                     glued.add(key)  # "~", "-", an elided "d'": no space needed
                 if relation == "article":
@@ -332,7 +339,8 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
         if unspaced:
             unspaced_suffixes.update(fold(s) for s in data.ordinal_suffixes)
         if data.meta.particles:
-            join_endings[lang] = tuple(" ".join(fold(w).split()) for w in data.connectives.get("range_join", ())
+            join_endings[lang] = tuple(" ".join(fold(w).split()) for rel in ("range_join", "between_join")
+                                       for w in data.connectives.get(rel, ())
                                        if w[:1].isalpha() or w[:1] == "'")
     before_words = [w for w, langs in relations.items()
                     if any(r - POST_RELATIONS for r in langs.values())]
@@ -347,7 +355,9 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
                        r"\s+(?P<s>{})" + NO_WORD_AFTER, r"\s*(?P<s2>{})")
     suffix = re.compile(post_alt)
     osfx = f"(?:{trie_regex(sorted(ordinal_suffixes))})?" if ordinal_suffixes else ""
-    spaced_join = trie_regex(sorted(w for w in joins if w not in glued)) or "(?!)"
+    # Joins written as words may stand between spaces even where they may also be glued
+    # ("1 ile 15 Mart", "3월과 5월").
+    spaced_join = trie_regex(sorted(w for w in joins if w not in glued or w[:1].isalnum())) or "(?!)"
     article = trie_regex(sorted(articles)) or "(?!)"
     day_end = re.compile(
         rf"(?:\s+(?P<j>{spaced_join})\s+|\s*-\s*)(?:(?:{article})\s+)?(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?![\w/.:-])"
