@@ -209,12 +209,14 @@ class WeekdayRef(Meaning):
 
     ``mode`` is ``"bare"`` (R13), ``"last"`` (R14), ``"next"`` (R15) or ``"week"`` (R16, the
     weekday inside the week shifted by ``week_offset``). ``deadline`` marks R13 after by/due/until.
+    ``nearest`` marks R14/R15 phrases read the nearest way whatever ``weekday_reading`` says.
     """
 
     weekday: int
     mode: str
     week_offset: int = 0
     deadline: bool = False
+    nearest: bool = False  # the phrase itself names the nearest such day ("次の月曜日")
 
 
 class WeekdayCount(Meaning):

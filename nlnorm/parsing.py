@@ -169,7 +169,8 @@ def parse_candidate(c: Candidate, ctx: "Context") -> Meaning | None:
         if r == "R16":
             offset = slot("dir", slot("offset", 0))
             return WeekdayRef(weekday, "week", int(offset))  # type: ignore[arg-type]
-        return WeekdayRef(weekday, "last" if r == "R14" else "next", -1 if r == "R14" else 1)
+        return WeekdayRef(weekday, "last" if r == "R14" else "next", -1 if r == "R14" else 1,
+                          nearest=bool(slot("nearest", False)))
     if r == "D":
         return Duration(_grain(slot("unit")), int(slot("num", 1)))  # type: ignore[arg-type]
     return _parse_date(c, ctx)

@@ -183,6 +183,12 @@ def weekday(m: WeekdayRef, ctx: "Context", lang: str) -> Outcome:
         nearest = today + timedelta(days=((wd - today.weekday()) % 7) or 7)
         near = day_reading(nearest, "R15", f"the first {name} strictly after today")
         week = day_reading(in_week(1), "R16", f"{name} of next week (weeks start on {ctx.week_start})")
+    if m.nearest:
+        # The phrase itself says the nearest day ("次の月曜日", the coming Monday): no setting
+        # reads it as that day of the next week, which stays an alternative.
+        alts = (reading(week.interval, week.reading, week.note, None),) \
+            if near.interval.start != week.interval.start else ()
+        return near, alts
     if preference == "week":
         alts = (reading(near.interval, near.reading, near.note, "weekday_reading=nearest"),) \
             if near.interval.start != week.interval.start else ()
