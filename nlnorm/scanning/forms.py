@@ -30,6 +30,8 @@ from .lexicon import NO_WORD_AFTER, NO_WORD_BEFORE, REGEX_CLASSES, TRIGGER_CLASS
 
 __all__ = ["Form", "compile_form", "CANONICAL_SLOT"]
 
+#: A literal that may lead a form: a word, or words joined by elision ("dall'inizio").
+_LEADING_WORD = re.compile(r"\w+(?:'\w+)*")
 _TOKEN_PIECE = re.compile(r"\{([a-z_0-9]+)\}|\(([^(){}]*\|[^(){}]*)\)|([^{}]+?)(?=\{|\([^(){}]*\|[^(){}]*\)|$)")
 #: A fixed-value piece ``{unit=month}`` matches no text and gives its slot that value.
 _FIXED_PIECE = re.compile(r"\{([a-z_0-9]+)=([^{}=\s]+)\}")
@@ -272,7 +274,7 @@ def form_head(source: str, lex: Lexicon) -> FormHead:
                 lowered = fold(literal)
                 keys.add(key_of(lowered))
                 chars.add(lowered[0])
-                word = re.match(r"\w+", lowered)
+                word = _LEADING_WORD.match(lowered)
                 if word and word.end() == len(lowered) and m.end() == len(body):
                     leaders.add(lowered)
             # The texts the whole token can be: a slot glued to a word makes one run of
@@ -384,7 +386,7 @@ def compile_form(
                     if first_piece:
                         firsts.add(lowered[0])
                         keys.add(key_of(lowered))
-                        word = re.match(r"\w+", lowered)
+                        word = _LEADING_WORD.match(lowered)
                         if word and word.end() == len(lowered) and len(parts) == 1 and \
                                 m.end() == len(body):
                             leaders.add(lowered)
