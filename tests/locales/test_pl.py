@@ -63,7 +63,6 @@ from tests.resolution.test_readings_en import (
     quarter,
     quarter_of,
     since,
-    span,
     strictly_after,
     strictly_before,
     until,
