@@ -75,6 +75,10 @@ class Meta(_Strict):
     # mid-sentence is another word ("la mission vers Mars"), whatever cue stands before it.
     lowercase_names: bool = False
     particles: tuple[str, ...] = ()  # case endings glued to a phrase ("지난주에", "haftaki")
+    # Characters only this language writes among those sharing its script (Japanese kana, a
+    # regular-expression class). A phrase this language and another read alike is read as this
+    # language's in a question holding one ("2025年以前のチケット"), as the other's otherwise.
+    marks: str = ""
     carrier: str = ""  # a short question with {} where a time phrase goes (conformance tests)
     sources: tuple[str, ...] = ()
 

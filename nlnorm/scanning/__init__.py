@@ -124,6 +124,9 @@ def _scan_exact(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     hits, leaders = _marks(text, scanner)
     if not hits:
         return ()
+    # A language with marks (kana: Japanese) wins ties when the question holds one, and loses
+    # them when it holds none.
+    prefer = {lang: 1 if rx.search(text) else -1 for lang, rx in scanner.marks}
     # Forms start at a trigger, at the start of the word holding it ("q3"), or at a leading
     # word shortly before it ("in the last 3 weeks").
     positions = set(hits)
@@ -186,13 +189,14 @@ def _scan_exact(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
                 if m is None:
                     continue
                 if isinstance(k, str) and len(bucket.forms) > 1:
-                    m = _longest(bucket, text, pos, m)
+                    m = _longest(bucket, text, pos, m, prefer)
                 end = m.end()
                 if end > best_end:
                     best, best_end = (m, bucket.forms[m.lastgroup]), end  # type: ignore[index]
                 elif end == best_end and best is not None:
                     form = bucket.forms[m.lastgroup]  # type: ignore[index]
-                    if (form.tokens, -form.order) > (best[1].tokens, -best[1].order):
+                    if (prefer.get(form.lang, 0), form.tokens, -form.order) > \
+                            (prefer.get(best[1].lang, 0), best[1].tokens, -best[1].order):
                         best = (m, form)
         if best is None:
             continue
@@ -206,15 +210,19 @@ def _scan_exact(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     return combine(prepared, found, scanner)
 
 
-def _longest(bucket, text: str, pos: int, m):  # type: ignore[no-untyped-def]
+def _longest(bucket, text: str, pos: int, m, prefer=None):  # type: ignore[no-untyped-def]
     """The longest match of a bucket's forms at ``pos``. Without word boundaries a form may
     end anywhere ("这个周" inside "这个周末"), so the first alternative that matches is not
-    always the longest; on a tie the bucket's order (the more specific form) stays."""
-    best = m
+    always the longest. On a tie the language ``prefer`` ranks higher wins (see Meta.marks),
+    else the bucket's order (the more specific form) stays."""
+    rank = (prefer or {}).get
+    best, best_rank = m, rank(bucket.forms[m.lastgroup].lang, 0)
     for form in bucket.forms.values():
         other = form.regex.match(text, pos)
-        if other is not None and other.end() > best.end():
-            best = other
+        if other is None:
+            continue
+        if other.end() > best.end() or (other.end() == best.end() and rank(form.lang, 0) > best_rank):
+            best, best_rank = other, rank(form.lang, 0)
     return best
 
 

@@ -103,6 +103,7 @@ class Scanner:
     _compiled: dict[int, Form]  # CLDR-generated forms compiled so far, by order
     unspaced: bool = False  # some language is written without spaces: try per-character buckets
     lookback: int = 48  # characters before a trigger in which leading words are tried
+    marks: tuple[tuple[str, re.Pattern[str]], ...] = ()  # (language, its marks): see Meta.marks
 
     @property
     def forms(self) -> tuple[Form, ...]:
@@ -483,4 +484,6 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
         _cache={},
         _compiled={},
         unspaced=any(not lex.spaces for lex in lexicons.values()),
+        marks=tuple((lang, re.compile(f"[{load_locale(lang).meta.marks}]")) for lang in languages
+                    if load_locale(lang).meta.marks),
     )

@@ -818,6 +818,29 @@ def test_a_japanese_and_an_english_phrase_in_one_question_are_both_found() -> No
     assert [(m.text, m.lang) for m in result.mentions] == [("this weekend", "en"), ("来週末", "ja")]
 
 
+# --- every language at once ---------------------------------------------------------------------
+
+#: Japanese questions whose phrases Chinese writes alike, read with every deep language enabled:
+#: kana in the question make the Japanese reading win (locales/ja.toml ``marks``).
+SHARED_WITH_CHINESE = [
+    ("R10-ja-all-2025-nen-izen-takes-the-year-in", "2025年以前のチケット", "2025年以前", until(year(2025))),
+    ("R10-ja-all-3-gatsu-izen", "3月以前のバグ", "3月以前", until(_MARCH_PAST)),
+    ("R2-ja-all-kotoshi", "今年のバグ", "今年", year(2026)),
+]
+
+
+@pytest.mark.parametrize(("question", "phrase", "bounds"), [c[1:] for c in SHARED_WITH_CHINESE],
+                         ids=[c[0] for c in SHARED_WITH_CHINESE])
+def test_kana_make_a_phrase_written_alike_in_chinese_japanese(question, phrase, bounds):
+    m = one(question, languages="all")
+    assert (m.text, m.lang, (m.start, m.end)) == (phrase, "ja", bounds)
+
+
+@pytest.mark.parametrize("question", ["2025年度の予算", "前年比の売上", "今回のリリース"])
+def test_a_japanese_look_alike_stays_one_with_every_language(question):
+    assert run(question, languages="all").mentions == ()
+
+
 # --- look-alikes (reading N) -------------------------------------------------------------------
 
 TRAPS = [

@@ -816,6 +816,29 @@ def test_a_chinese_and_an_english_phrase_in_one_question_are_both_found() -> Non
     assert [(m.text, m.lang) for m in result.mentions] == [("this weekend", "en"), ("下个周末", "zh")]
 
 
+# --- every language at once ---------------------------------------------------------------------
+
+#: Chinese questions whose phrases Japanese writes alike, read with every deep language enabled:
+#: without kana the Chinese reading wins (locales/ja.toml ``marks``).
+SHARED_WITH_JAPANESE = [
+    ("R9-zh-all-2025-nian-yiqian-leaves-the-year-out", "2025年以前的工单", "2025年以前", before(year(2025))),
+    ("R9-zh-all-3-yue-yiqian", "3月以前的bug", "3月以前", before(_MARCH_PAST)),
+    ("R17-zh-all-2025-niandu-is-the-calendar-year", "2025年度的事故", "2025年度", year(2025)),
+]
+
+
+@pytest.mark.parametrize(("question", "phrase", "bounds"), [c[1:] for c in SHARED_WITH_JAPANESE],
+                         ids=[c[0] for c in SHARED_WITH_JAPANESE])
+def test_without_kana_a_phrase_written_alike_in_japanese_is_chinese(question, phrase, bounds):
+    m = one(question, languages="all")
+    assert (m.text, m.lang, (m.start, m.end)) == (phrase, "zh", bounds)
+
+
+@pytest.mark.parametrize("question", ["明日之星", "今后的计划", "至今未修复的bug", "每周一的例会"])
+def test_a_chinese_look_alike_stays_one_with_every_language(question):
+    assert run(question, languages="all").mentions == ()
+
+
 # --- look-alikes (reading N) -------------------------------------------------------------------
 
 TRAPS = [
