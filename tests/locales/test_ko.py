@@ -15,7 +15,8 @@ Checked against:
 - the questions and phrases are written from knowledge of the language (no published source);
 - common practice (no published source): "지난 월요일" / "다음 목요일" mean that day of last /
   next week, paired with CLDR's "이번 월요일" for the Monday of this week (locales/ko.toml
-  ``weekday_reading = "week"``); "X부터" takes X in (R7), "X 이후" starts after X (R8), "X 이전"
+  ``weekday_reading = "week"``), while "오는 금요일" / "돌아오는 금요일" is the coming Friday;
+  "X부터" takes X in (R7), "X 이후" starts after X (R8), "X 이전"
   ends before X (R9), "X까지" takes X in (R10); "X부터 Y까지" and "X과 Y 사이" take both ends in;
   "3일 이내" / "3일 안에" is the next 3 days; "지난 3일" needs "동안" or "간" to be a window
   (alone it is also "the 3rd"); "3월 3주차" (a week of a month) is left alone.
@@ -429,6 +430,8 @@ R15 = [
          day(strictly_after(TODAY, MO)), weekday_reading="nearest"),
     case("R15-ko-doraoneun-suyoil-said-on-a-Wednesday", "돌아오는 수요일 회의", "돌아오는 수요일", "R15",
          day(strictly_after(TODAY, WE)), weekday_reading="nearest"),
+    case("R15-ko-oneun-geumyoil-is-the-coming-one-by-default", "오는 금요일 데모", "오는 금요일", "R15",
+         day(strictly_after(TODAY, FR)), alts=(alt("R16", None, day(in_week(TODAY, FR, 1))),)),
     case("R15-ko-daeum-iryoil-said-on-a-Sunday", "다음 일요일 점검", "다음 일요일", "R15",
          day(strictly_after(SUNDAY.date(), SU)), now=SUNDAY, weekday_reading="nearest"),
 ]

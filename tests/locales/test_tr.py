@@ -15,7 +15,8 @@ Checked against:
 - the questions and phrases are written from knowledge of the language (no published source);
 - common practice (no published source): "geçen pazartesi" / "gelecek perşembe" mean that day
   of last / next week, paired with "bu pazartesi" for the Monday of this week (locales/tr.toml
-  ``weekday_reading = "week"``); "önümüzdeki hafta sonu" is the coming weekend; "X'e kadar"
+  ``weekday_reading = "week"``); "önümüzdeki cuma" ("the Friday ahead of us") is the coming
+  Friday and "önümüzdeki hafta sonu" the coming weekend; "X'e kadar"
   takes X in (R10), "X'ten önce" ends before X; "X ile Y arasında" and "X'ten Y'ye kadar" take
   both ends in; "3 gün içinde" is the next 3 days; "önceki gün" is the day before yesterday;
   "son" opens a window only before a number ("son 3 gün"; "son gün" is a deadline).
@@ -499,9 +500,12 @@ R15 = [
     case("R15-tr-gelecek-persembe-is-tomorrow-nearest", "Gelecek perşembe planlanan işler",
          "Gelecek perşembe", "R15", day(strictly_after(TODAY, TH)),
          alts=(alt("R16", _WEEK, day(in_week(TODAY, TH, 1))),), weekday_reading="nearest"),
-    case("R15-tr-onumuzdeki-cuma-nearest", "Önümüzdeki cuma demo var", "Önümüzdeki cuma", "R15",
-         day(strictly_after(TODAY, FR)), alts=(alt("R16", _WEEK, day(in_week(TODAY, FR, 1))),),
-         weekday_reading="nearest"),
+    case("R15-tr-onumuzdeki-cuma-is-the-coming-one-by-default", "Önümüzdeki cuma demo var",
+         "Önümüzdeki cuma", "R15", day(strictly_after(TODAY, FR)),
+         alts=(alt("R16", None, day(in_week(TODAY, FR, 1))),)),
+    case("R15-tr-onumuzdeki-cuma-whatever-the-weekday-reading", "Önümüzdeki cuma demo var",
+         "Önümüzdeki cuma", "R15", day(strictly_after(TODAY, FR)),
+         alts=(alt("R16", None, day(in_week(TODAY, FR, 1))),), weekday_reading="week"),
     case("R15-tr-gelecek-pazartesi-both-readings-agree", "Gelecek pazartesi başlayacak işler",
          "Gelecek pazartesi", "R15", day(strictly_after(TODAY, MO)), weekday_reading="nearest"),
     case("R15-tr-bir-sonraki-carsamba-said-on-a-Wednesday", "Bir sonraki çarşamba toplantı var",
