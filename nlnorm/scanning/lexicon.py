@@ -248,13 +248,17 @@ def lexicon(lang: str) -> Lexicon:
         for form in forms:
             put("unit", form, grain)
     # CLDR's abbreviated units keep their dot ("in {0} hr.", "last qtr."): a unit word may be
-    # written with it, so a curated form reads the whole CLDR phrase.
+    # written with it, so a curated form reads the whole CLDR phrase. An abbreviation that is
+    # also a weekday of the language (Portuguese "seg.", second and Monday) is left to CLDR's
+    # own phrases.
+    weekday_words = set(words.get("weekday", {})) | set(words.get("weekday_abbr", {}))
     for pattern in cldr.relative_patterns(lang):
         if pattern.field in cldr.FIELD_GRAINS.values() and pattern.width != "narrow":
             tokens = fold(pattern.pattern).split()
             for i, token in enumerate(tokens):
                 if token == "{0}" and i + 1 < len(tokens) and tokens[i + 1].endswith("."):
-                    put("unit", tokens[i + 1], pattern.field)
+                    if tokens[i + 1] not in weekday_words:
+                        put("unit", tokens[i + 1], pattern.field)
     offsets = {"last": -1, "this": 0, "next": 1}
     for name, forms in data.direction.items():
         for form in forms:
