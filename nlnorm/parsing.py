@@ -189,6 +189,10 @@ def _parse_date(c: Candidate, ctx: "Context") -> DateRef | None:
         return DateRef(first.grain, year=first.year, month=first.month, day=first.day,
                        alternate=other, order=first.order)
     year = slot("year", slot("year_from_end"))
+    offset = slot("relyear", slot("year_offset"))
+    if year is None and offset is not None:
+        # A year named relative to now ("去年12月": December of last year).
+        year = ctx.now.year + int(offset)  # type: ignore[arg-type]
     half = slot("hnum")
     quarter = slot("qnum")
     ordinal = slot("ordinal", slot("ordinal_half"))

@@ -110,7 +110,7 @@ def trie_regex(words: list[str] | tuple[str, ...] | frozenset[str], spaces: str 
 
 
 #: Word classes every lexicon answers for, even when the language has no words in them.
-WORD_CLASSES = ("month", "month_wide", "month_abbr", "weekday", "weekday_abbr", "relday",
+WORD_CLASSES = ("month", "month_wide", "month_abbr", "weekday", "weekday_abbr", "relday", "relyear",
                 "dayperiod", "unit", "dir", "ordinal", "ordinal_half", "weekend", "to_date",
                 "dayperiod_phrase", "num")
 
@@ -232,6 +232,8 @@ def lexicon(lang: str) -> Lexicon:
     for field in cldr.relative_fields(lang):
         if field.field == "day":
             put("relday", field.text, field.offset)
+        elif field.field == "year":
+            put("relyear", field.text, field.offset)  # "去年", "今年": in "去年12月"
     for key, phrases in data.relative_day.items():
         for phrase in phrases:
             put("relday", phrase, int(key))

@@ -555,6 +555,8 @@ R18 = [
     case("R18-ja-numeric-date-order-policy-MDY", "04/03/2026に修正", "04/03/2026", "R18",
          day(date(2026, 4, 3)), alts=(alt("R18", "date_order=DMY", day(date(2026, 3, 4))),), date_order="MDY"),
     case("R18-ja-numeric-only-one-valid-reading", "13/04/2026に修正", "13/04/2026", "R18", day(date(2026, 4, 13))),
+    case("R18-ja-kyonen-no-12-gatsu-3-nichi", "去年の12月3日にリリース", "去年の12月3日", "R18",
+         day(date(TODAY.year - 1, 12, 3))),
 ]
 
 R19 = [
@@ -568,6 +570,12 @@ R19 = [
     case("R19-ja-2025-nen-shimohanki", "2025年下半期の目標", "2025年下半期", "R19", half(2025, 2), "2025-H2"),
     case("R19-ja-2026-nen-H1", "2026年H1の目標", "2026年H1", "R19", half(2026, 1)),
     case("R19-ja-ISO-year-month-glued", "2025-03のバグ", "2025-03", "R19", month(2025, 3), "2025-03"),
+    # A year named relative to now: CLDR's 昨年/今年/来年, or colloquial 去年.
+    case("R19-ja-kotoshi-no-3-gatsu", "今年の3月のバグ", "今年の3月", "R19", month(TODAY.year, 3), "2026-03"),
+    case("R19-ja-sakunen-no-12-gatsu", "昨年の12月のインシデント", "昨年の12月", "R19", month(TODAY.year - 1, 12)),
+    case("R19-ja-kyonen-3-gatsu", "去年3月のバグ", "去年3月", "R19", month(TODAY.year - 1, 3), "2025-03"),
+    case("R19-ja-kotoshi-no-dai-1-shihanki", "今年の第1四半期の売上", "今年の第1四半期", "R19",
+         quarter(TODAY.year, 1), "2026-Q1"),
 ]
 
 
@@ -587,6 +595,7 @@ R20 = [
     case("R20-ja-2026-nen-dai-48-shuu", "2026年第48週のチケット", "2026年第48週", "R20", iso_week(2026, 48),
          "2026-W48"),
     case("R20-ja-2027-nen-dai-1-shuu", "2027年第1週のチケット", "2027年第1週", "R20", iso_week(2027, 1), "2027-W01"),
+    case("R20-ja-kotoshi-dai-48-shuu", "今年第48週のチケット", "今年第48週", "R20", iso_week(TODAY.year, 48)),
     case("R20-ja-ISO-2026-W48", "2026-W48のチケット", "2026-W48", "R20", iso_week(2026, 48)),
     case("R20-ja-2026-nen-W48", "2026年W48のチケット", "2026年W48", "R20", iso_week(2026, 48)),
     case("R20-ja-dai-48-shuu-past-bias", "第48週のチケット", "第48週", "R20", iso_week(_recent_week(48), 48),

@@ -344,6 +344,8 @@ R7 = [
          alts=(alt("R7", _FUT, since(_MARCH_NEXT)),)),
     case("R7-zh-2024-nian-yilai", "2024年以来打开的工单", "2024年以来", "R7", since(year(2024)),
          "2024-01-01/.."),
+    case("R7-zh-cong-jinnian-3-yue-qi", "从今年3月起一直没人处理的bug", "从今年3月起", "R7",
+         since(month(TODAY.year, 3)), "2026-03-01/.."),
     case("R7-zh-shangzhou-yilai", "上周以来的提交", "上周以来", "R7", since(zh_week(TODAY + D(weeks=-1)))),
     case("R7-zh-zi-zhouyi-yilai", "自周一以来的提交", "自周一以来", "R7", since(_MONDAY_PAST),
          alts=(alt("R7", _FUT, since(_MONDAY_NEXT)),)),
@@ -560,6 +562,8 @@ R18 = [
     case("R18-zh-numeric-only-one-valid-reading", "13/04/2026修复的", "13/04/2026", "R18",
          day(date(2026, 4, 13))),
     case("R18-zh-zai-date", "在2025年3月14日修复的", "在2025年3月14日", "R18", day(date(2025, 3, 14))),
+    case("R18-zh-qunian-12-yue-3-ri", "去年12月3日修复的", "去年12月3日", "R18",
+         day(date(TODAY.year - 1, 12, 3))),
 ]
 
 R19 = [
@@ -573,6 +577,12 @@ R19 = [
     case("R19-zh-2025-nian-xiabannian", "2025年下半年的目标", "2025年下半年", "R19", half(2025, 2), "2025-H2"),
     case("R19-zh-2026-nian-H1", "2026年H1的目标", "2026年H1", "R19", half(2026, 1)),
     case("R19-zh-ISO-year-month-glued", "2025-03的bug", "2025-03", "R19", month(2025, 3), "2025-03"),
+    # A year CLDR names relative to now (去年, 今年, 明年) before a month, quarter or half.
+    case("R19-zh-qunian-12-yue", "去年12月的事故报告", "去年12月", "R19", month(TODAY.year - 1, 12), "2025-12"),
+    case("R19-zh-jinnian-di-yi-jidu", "今年第一季度关闭了多少bug？", "今年第一季度", "R19",
+         quarter(TODAY.year, 1), "2026-Q1"),
+    case("R19-zh-mingnian-1-yue", "明年1月的发布", "明年1月", "R19", month(TODAY.year + 1, 1)),
+    case("R19-zh-qunian-xiabannian", "去年下半年的目标", "去年下半年", "R19", half(TODAY.year - 1, 2)),
 ]
 
 
@@ -592,6 +602,7 @@ R20 = [
     case("R20-zh-2026-nian-di-48-zhou", "2026年第48周的工单", "2026年第48周", "R20", iso_week(2026, 48),
          "2026-W48"),
     case("R20-zh-2027-nian-di-1-zhou", "2027年第1周的工单", "2027年第1周", "R20", iso_week(2027, 1), "2027-W01"),
+    case("R20-zh-jinnian-di-48-zhou", "今年第48周的工单", "今年第48周", "R20", iso_week(TODAY.year, 48)),
     case("R20-zh-ISO-2026-W48", "2026-W48的工单", "2026-W48", "R20", iso_week(2026, 48)),
     case("R20-zh-2026-nian-W48", "2026年W48的工单", "2026年W48", "R20", iso_week(2026, 48)),
     case("R20-zh-di-48-zhou-past-bias", "第48周的工单", "第48周", "R20", iso_week(_recent_week(48), 48),
