@@ -1,7 +1,4 @@
-"""Japanese: worked examples for every reading R1-R23 and D, the policies, numeric dates in the
-CLDR order of ``ja``, questions mixing Japanese and English, and look-alike words (reading N).
-
-Checked against:
+"""Checked against:
 - python-dateutil ``relativedelta``: weekday steps, day, week, month and year arithmetic with
   month-end clamping; stdlib ``calendar.isleap``;
 - ISO 8601 week dates via stdlib ``date.fromisocalendar``;
@@ -20,6 +17,9 @@ Checked against:
   "3日間" and "3か月" are lengths of time but "3日" is the 3rd; 午前 and 午後 (a.m., p.m.) are
   read as CLDR's 朝 and 昼 periods; "今年度" is a fiscal year (from April in Japan), not a
   calendar year, so it gives no mention.
+
+Japanese: worked examples for every reading R1-R23 and D, the policies, numeric dates in the
+CLDR order of ``ja``, questions mixing Japanese and English, and look-alike words (reading N).
 """
 
 from __future__ import annotations

@@ -1,8 +1,4 @@
-"""Chinese (Simplified): worked examples for every reading R1-R23 and D, the policies, numeric
-dates in the CLDR order of ``zh``, questions mixing Chinese and English, and look-alike words
-(reading N).
-
-Checked against:
+"""Checked against:
 - python-dateutil ``relativedelta``: weekday steps, day, week, month and year arithmetic with
   month-end clamping; stdlib ``calendar.monthrange``/``calendar.isleap``;
 - ISO 8601 week dates via stdlib ``date.fromisocalendar``;
@@ -18,6 +14,10 @@ Checked against:
   (locales/zh.toml ``weekday_reading = "week"``); "3月之前" ends before March and "截至周五"
   takes Friday in; "从3月到5月" and "3月和5月之间" take both ends in; "三个月" is three months
   but "3月" is March; "每周一" (every Monday) names no one day.
+
+Chinese (Simplified): worked examples for every reading R1-R23 and D, the policies, numeric
+dates in the CLDR order of ``zh``, questions mixing Chinese and English, and look-alike words
+(reading N).
 """
 
 from __future__ import annotations
