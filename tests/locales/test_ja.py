@@ -231,6 +231,8 @@ R2 = [
     case("R2-ja-senshuu", "先週作成されたバグは？", "先週", "R2", ja_week(TODAY + D(weeks=-1)),
          iso_week_name(TODAY + D(weeks=-1))),
     case("R2-ja-konshuu", "今週クローズしたチケット", "今週", "R2", ja_week(TODAY), iso_week_name(TODAY)),
+    case("R2-ja-senshuu-no-the-particle-stays-in-the-question", "先週のバグは？", "先週", "R2",
+         ja_week(TODAY + D(weeks=-1))),
     case("R2-ja-raishuu", "来週の予定は？", "来週", "R2", ja_week(TODAY + D(weeks=1))),
     case("R2-ja-yokushuu", "翌週の予定", "翌週", "R2", ja_week(TODAY + D(weeks=1))),
     case("R2-ja-sengetsu-at-a-month-end", "先月修正したバグ", "先月", "R2",
@@ -811,6 +813,7 @@ MIXED = [
     ("R10-ja-en-kinyoubi-made-no-tasks", "金曜日までの tasks", "金曜日まで", "ja", until(day(on_or_after(TODAY, FR)))),
     ("R7-ja-en-since-Monday-no-commits", "since Monday の commits", "since Monday", "en", since(_MONDAY_PAST)),
     ("R7-ja-en-open-issues-3-gatsu-ikou", "open issues 3月以降", "3月以降", "ja", since(_MARCH_PAST)),
+    ("R7-ja-en-bugs-since-senshuu", "bugs since 先週", "since 先週", "en", since(ja_week(TODAY + D(weeks=-1)))),
 ]
 
 
@@ -820,6 +823,12 @@ def test_a_question_mixing_japanese_and_english_finds_the_phrase_in_either(quest
     m = one(question, languages=("ja", "en"))
     assert (m.text, m.lang, (m.start, m.end)) == (phrase, lang, bounds)
     assert question[m.char_start : m.char_end] == phrase
+
+
+def test_a_german_connective_before_a_japanese_phrase() -> None:
+    # "tickets von 先週": German "von" (from) joins the Japanese phrase it stands before.
+    m = one("tickets von 先週", languages=("ja", "de", "en"))
+    assert (m.text, (m.start, m.end)) == ("von 先週", ja_week(TODAY + D(weeks=-1)))
 
 
 def test_a_japanese_and_an_english_phrase_in_one_question_are_both_found() -> None:
