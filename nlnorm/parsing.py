@@ -193,6 +193,13 @@ def _parse_date(c: Candidate, ctx: "Context") -> DateRef | None:
     if year is None and offset is not None:
         # A year named relative to now ("去年12月": December of last year).
         year = ctx.now.year + int(offset)  # type: ignore[arg-type]
+    shift = slot("relmonth", slot("month_offset"))
+    if slot("month") is None and shift is not None:
+        # A month named relative to now ("来月15日": the 15th of next month).
+        shifted, index = divmod(ctx.now.year * 12 + ctx.now.month - 1 + int(shift), 12)  # type: ignore[arg-type]
+        year = shifted if year is None else year
+        c = Candidate(c.span, c.lang, c.reading, c.slots + (("month", index + 1),), c.weak)
+        slot = c.slot
     half = slot("hnum")
     quarter = slot("qnum")
     ordinal = slot("ordinal", slot("ordinal_half"))

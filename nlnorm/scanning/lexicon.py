@@ -110,7 +110,7 @@ def trie_regex(words: list[str] | tuple[str, ...] | frozenset[str], spaces: str 
 
 
 #: Word classes every lexicon answers for, even when the language has no words in them.
-WORD_CLASSES = ("month", "month_wide", "month_abbr", "weekday", "weekday_abbr", "relday", "relyear",
+WORD_CLASSES = ("month", "month_wide", "month_abbr", "weekday", "weekday_abbr", "relday", "relyear", "relmonth",
                 "dayperiod", "unit", "dir", "ordinal", "ordinal_half", "weekend", "to_date",
                 "dayperiod_phrase", "num")
 
@@ -234,6 +234,8 @@ def lexicon(lang: str) -> Lexicon:
             put("relday", field.text, field.offset)
         elif field.field == "year":
             put("relyear", field.text, field.offset)  # "去年", "今年": in "去年12月"
+        elif field.field == "month":
+            put("relmonth", field.text, field.offset)  # "来月", "下个月": in "来月15日"
     for key, phrases in data.relative_day.items():
         for phrase in phrases:
             put("relday", phrase, int(key))

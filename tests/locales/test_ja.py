@@ -331,6 +331,8 @@ R6 = [
          alts=(alt("R6", _CAL, _cal_ahead(NOW, TODAY, 3, "days")),)),
     case("R6-ja-kongo-6-jikan", "今後6時間のジョブ", "今後6時間", "R6", (iso(NOW), elapsed(NOW, hours=6)),
          alts=(alt("R6", _CAL, (elapsed(floor_hour(NOW), hours=1), elapsed(floor_hour(NOW), hours=7))),)),
+    case("R6-ja-hantoshi-inai", "半年以内の回帰テスト", "半年以内", "R6", (iso(NOW), wall(NOW, months=6)),
+         alts=(alt("R6", _CAL, _cal_ahead(NOW, _THIS_MONTH, 6, "months")),)),
     case("R6-ja-calendar-policy-reads-whole-days", "今後3日間に期限のタスク", "今後3日間", "R6",
          _cal_ahead(NOW, TODAY, 3, "days"), alts=(alt("R6", _ROLL, (iso(NOW), wall(NOW, days=3))),),
          window_reading="calendar"),
@@ -559,6 +561,9 @@ R18 = [
     case("R18-ja-numeric-only-one-valid-reading", "13/04/2026に修正", "13/04/2026", "R18", day(date(2026, 4, 13))),
     case("R18-ja-kyonen-no-12-gatsu-3-nichi", "去年の12月3日にリリース", "去年の12月3日", "R18",
          day(date(TODAY.year - 1, 12, 3))),
+    case("R18-ja-raigetsu-15-nichi", "来月15日にリリース", "来月15日", "R18",
+         day((TODAY + D(months=1)).replace(day=15)), "2027-01-15"),
+    case("R18-ja-sengetsu-3-ka", "先月3日のインシデント", "先月3日", "R18", day((TODAY + D(months=-1)).replace(day=3))),
 ]
 
 R19 = [

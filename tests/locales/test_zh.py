@@ -324,6 +324,8 @@ R6 = [
          alts=(alt("R6", _CAL, _cal_ahead(NOW, TODAY, 3, "days")),)),
     case("R6-zh-weilai-yigeyue", "未来一个月上线的功能", "未来一个月", "R6", (iso(NOW), wall(NOW, months=1)),
          alts=(alt("R6", _CAL, _cal_ahead(NOW, _THIS_MONTH, 1, "months")),)),
+    case("R6-zh-bannian-nei", "半年内的回归测试", "半年内", "R6", (iso(NOW), wall(NOW, months=6)),
+         alts=(alt("R6", _CAL, _cal_ahead(NOW, _THIS_MONTH, 6, "months")),)),
     case("R6-zh-calendar-policy-reads-whole-days", "未来三天到期的任务", "未来三天", "R6",
          _cal_ahead(NOW, TODAY, 3, "days"), alts=(alt("R6", _ROLL, (iso(NOW), wall(NOW, days=3))),),
          window_reading="calendar"),
@@ -564,6 +566,9 @@ R18 = [
     case("R18-zh-zai-date", "在2025年3月14日修复的", "在2025年3月14日", "R18", day(date(2025, 3, 14))),
     case("R18-zh-qunian-12-yue-3-ri", "去年12月3日修复的", "去年12月3日", "R18",
          day(date(TODAY.year - 1, 12, 3))),
+    case("R18-zh-xiageyue-15-hao", "下个月15号发布的版本", "下个月15号", "R18",
+         day((TODAY + D(months=1)).replace(day=15)), "2027-01-15"),
+    case("R18-zh-shangyue-3-hao", "上月3号的事故", "上月3号", "R18", day((TODAY + D(months=-1)).replace(day=3))),
 ]
 
 R19 = [
