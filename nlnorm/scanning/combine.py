@@ -7,8 +7,10 @@ stays only when a connective or a range vouches for it.
 
 from __future__ import annotations
 
+import functools
 import re
 from dataclasses import replace
+from typing import Mapping
 
 from ..locale import load_locale
 from ..model import Candidate, Span
@@ -21,6 +23,7 @@ _BOUND = {"since": "R7", "after": "R8", "before": "R9", "until": "R10"}
 _DAY_READINGS = ("R12", "R18")
 _SENTENCE_END = re.compile(r"(?:^|[.!?:;\"'(\[]\s*)$")
 _PREV_WORD = re.compile(r"(\w+)\W*$")
+_LETTERS = re.compile(r"[^\W\d_]+")
 
 
 #: What a short connective of another language may do to a phrase: join it, which keeps its
@@ -29,14 +32,43 @@ _PREV_WORD = re.compile(r"(\w+)\W*$")
 #: only phrases of their own language and ISO notation ("und"); longer ones ("since letzten
 #: Montag") and the glued words of languages written without spaces bind any phrase. No
 #: connective of another language vouches for a weak phrase ("we may": Polish "we" is "in").
+#: A phrase whose words the connective's language knows as well (a bare number, the weekday
+#: abbreviation "пт" of Russian and Ukrainian) is read as that language's: "з пн по пт".
 _ACROSS_LANGUAGES = frozenset({"within", "on_day", "cue"})
 
 
-def _relations(scanner: Scanner, phrase: str, lang: str) -> frozenset[str]:
+@functools.cache
+def _known_words(lang: str) -> frozenset[str]:
+    """Every word of the lexicon of ``lang`` (the words of its multi-word entries too)."""
+    from .lexicon import lexicon
+
+    return frozenset(token for table in lexicon(lang).words.values() for entry in table
+                     for token in entry.split())
+
+
+def _reader(scanner: Scanner, table: Mapping[str, frozenset[str]], lang: str,
+            phrase: str | None) -> str | None:
+    """The language whose relations a connective has with a phrase of ``lang``: ``lang``
+    itself, or a language of the connective that knows every word of the phrase."""
+    if lang in table:
+        return lang
+    if phrase is None:
+        return None
+    words = _LETTERS.findall(phrase)
+    for other in table:
+        if other in scanner.lexicons and all(w in _known_words(other) for w in words):
+            return other
+    return None
+
+
+def _relations(scanner: Scanner, phrase: str, lang: str, text: str | None = None) -> frozenset[str]:
+    """The relations of the connective ``phrase`` to a phrase of ``lang`` (its ``text`` when
+    known)."""
     key = " ".join(phrase.split())
     table = scanner.connectives.relations.get(key, {})
-    if lang in table:
-        return table[lang]
+    reader = _reader(scanner, table, lang, text)
+    if reader is not None:
+        return table[reader]
     merged: set[str] = set()
     for rels in table.values():
         merged |= rels
@@ -46,9 +78,13 @@ def _relations(scanner: Scanner, phrase: str, lang: str) -> frozenset[str]:
     return frozenset(merged)
 
 
-def _foreign(scanner: Scanner, phrase: str, lang: str) -> bool:
-    """Whether the connective ``phrase`` belongs to another language than a phrase of ``lang``."""
-    return lang != "und" and lang not in scanner.connectives.relations.get(" ".join(phrase.split()), {})
+def _foreign(scanner: Scanner, phrase: str, lang: str, text: str | None = None) -> bool:
+    """Whether the connective ``phrase`` belongs to another language than a phrase of ``lang``
+    (with ``text``) and that language does not know the phrase's words."""
+    if lang == "und":
+        return False
+    table = scanner.connectives.relations.get(" ".join(phrase.split()), {})
+    return _reader(scanner, table, lang, text) is None
 
 
 def _connective_lang(scanner: Scanner, phrase: str, lang: str) -> str:
@@ -135,7 +171,8 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
             pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)
         pre_word = _group(pre, "c", "c2") if pre else None
         pre_start = _start(pre, "c", "c2") if pre else a.span.start
-        pre_rel = _relations(scanner, pre_word, a.lang) if pre_word else frozenset()
+        a_text = text[a.span.start:a.span.end]
+        pre_rel = _relations(scanner, pre_word, a.lang, a_text) if pre_word else frozenset()
         if pre and out and out[-1].span.end > pre_start:
             pre, pre_word, pre_rel, pre_start = None, None, frozenset(), a.span.start
 
@@ -182,7 +219,7 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
             m = conn.day_start.search(text, max(0, a.span.start - 40), a.span.start)
             if m is not None:
                 pre2 = m.group("pre")
-                pre2_rel = _relations(scanner, pre2, a.lang) if pre2 else frozenset()
+                pre2_rel = _relations(scanner, pre2, a.lang, a_text) if pre2 else frozenset()
                 j = m.group("j")
                 closing = _closing(scanner, text, a.span.end, a.lang)
                 if j is None or not _is_and(scanner, j, a.lang) or "between" in pre2_rel \
@@ -222,7 +259,7 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
 
         # A single connective before the phrase (one of another language does not vouch for a
         # weak word such as "mai"; a bare number such as a year has no language).
-        if pre_rel and not (a.weak and _foreign(scanner, pre_word or "", a.lang)
+        if pre_rel and not (a.weak and _foreign(scanner, pre_word or "", a.lang, a_text)
                             and any(ch.isalpha() for ch in text[a.span.start:a.span.end])):
             lang = _connective_lang(scanner, pre_word or "", a.lang)
             relation = next((r for r in ("since", "after", "before", "until") if r in pre_rel), None)

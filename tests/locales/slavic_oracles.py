@@ -145,6 +145,14 @@ class Runner:
             assert m.value == value
         assert tuple((a.reading, a.policy, a.start, a.end) for a in m.alternatives) == alts
 
+    def check_among_every_language(self, question, phrase, reading, bounds, context) -> None:  # type: ignore[no-untyped-def]
+        """The same phrase, reading and bounds with every deep language on (the default of
+        ``Context.languages``), in this language's locale."""
+        from nlnorm.locale import deep_languages
+
+        m = self.one(question, **{**context, "languages": deep_languages()})
+        assert (m.text, m.reading, (m.start, m.end)) == (phrase, reading, bounds)
+
     def alternatives_are_selected_by_their_policy(self, question: str, context: dict) -> None:
         m = self.one(question, **context)
         for a in m.alternatives:

@@ -365,7 +365,7 @@ R12 = [
          month(_past(lambda y: date(y, 12, 1), MID_JANUARY.date()), 12), "2026-12",
          alts=(alt("R12", FUT, month(_future(lambda y: date(y + 1, 1, 1), MID_JANUARY.date()), 12)),),
          now=MID_JANUARY),
-    case("R12-pl-14-marca", "Release 14 marca", "14 marca", "R12", day(date(_MAR14[0], 3, 14)),
+    case("R12-pl-14-marca", "Wydano 14 marca", "14 marca", "R12", day(date(_MAR14[0], 3, 14)),
          "2026-03-14", alts=(alt("R12", FUT, day(date(_MAR14[1], 3, 14))),)),
     case("R12-pl-3-grudnia-is-last-year", "Wydane 3 grudnia", "3 grudnia", "R12",
          day(date(_DEC3[0], 12, 3)), "2025-12-03", alts=(alt("R12", FUT, day(date(_DEC3[1], 12, 3))),)),
@@ -650,6 +650,12 @@ def test_the_clocks_and_CLDR_facts_the_tables_use() -> None:
 @pytest.mark.parametrize(PARAMS, all_cases(TABLES))
 def test_polish_phrase_resolves_to_its_interval(question, phrase, reading, bounds, value, alts, context):
     PL.check(question, phrase, reading, bounds, value, alts, context)
+
+
+@pytest.mark.parametrize(PARAMS, all_cases(TABLES))
+def test_polish_phrase_reads_the_same_with_every_language_on(question, phrase, reading, bounds, value, alts,
+                                                          context):
+    PL.check_among_every_language(question, phrase, reading, bounds, context)
 
 
 @pytest.mark.parametrize(PARAMS, all_cases(TABLES))

@@ -683,6 +683,12 @@ def test_russian_phrase_resolves_to_its_interval(question, phrase, reading, boun
 
 
 @pytest.mark.parametrize(PARAMS, all_cases(TABLES))
+def test_russian_phrase_reads_the_same_with_every_language_on(question, phrase, reading, bounds, value, alts,
+                                                          context):
+    RU.check_among_every_language(question, phrase, reading, bounds, context)
+
+
+@pytest.mark.parametrize(PARAMS, all_cases(TABLES))
 def test_every_russian_alternative_names_a_policy_that_selects_it_or_none(
         question, phrase, reading, bounds, value, alts, context):
     RU.alternatives_are_selected_by_their_policy(question, context)
@@ -839,6 +845,8 @@ TRAPS = [
     ("N-ru-v-blizhajshie-dni-plural-no-number", "Починим в ближайшие дни"),
     ("N-ru-poslednie-nedeli-plural-no-number", "Последние недели были спокойными"),
     ("N-ru-v-eti-dni", "В эти дни много багов"),
+    ("N-ru-na-sleduyushchij-den-told-of", "На следующий день билд упал"),
+    ("N-ru-sleduyushchego-dnya-told-of", "Исправили уже следующего дня"),
 ]
 
 

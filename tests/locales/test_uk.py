@@ -14,9 +14,10 @@ Checked against:
 - the questions and phrases are written from knowledge of the language (no published source);
 - common practice (no published source): "минулого понеділка" / "наступного четверга" mean that
   day of last / next week (locales/uk.toml ``weekday_reading = "week"``); "до X" ends before X,
-  "по X" and "аж до X" take X in; "з X по Y" and "між X і Y" take both ends in; "за 3 дні"
-  is "in 3 days", as CLDR's narrow future pattern "за {0} дн." writes it; the night just past
-  ("минулої ночі", "вчора вночі") is CLDR's night (00:00-04:00) of today's date.
+  "по X" and "аж до X" take X in; "з X по Y" and "між X і Y" take both ends in; CLDR's narrow
+  future pattern "за {0} дн." is "in 3 days"; the night just past
+  ("минулої ночі", "вчора вночі") is CLDR's night (00:00-04:00) of today's date; "за три дні"
+  spelt out is a length of time ("within three days"), "через три дні" the future day.
 """
 
 from __future__ import annotations
@@ -170,7 +171,7 @@ R4 = [
          month_of((JANUARY_END + D(months=1)).date()), "2026-02", now=JANUARY_END),
     case("R4-uk-cherez-2-hodyny", "Які джоби запустяться через 2 години", "через 2 години", "R4",
          hour_of(moved(NOW, hours=2))),
-    case("R4-uk-za-try-dni", "Реліз за три дні", "за три дні", "R4", day(TODAY + D(days=3))),
+    case("R4-uk-za-3-dn-CLDR-narrow", "Реліз за 3 дн.", "за 3 дн.", "R4", day(TODAY + D(days=3))),
     case("R4-uk-cherez-paru-dniv", "Реліз через пару днів", "через пару днів", "R4", day(TODAY + D(days=2))),
 ]
 
@@ -647,6 +648,12 @@ def test_ukrainian_phrase_resolves_to_its_interval(question, phrase, reading, bo
 
 
 @pytest.mark.parametrize(PARAMS, all_cases(TABLES))
+def test_ukrainian_phrase_reads_the_same_with_every_language_on(question, phrase, reading, bounds, value, alts,
+                                                          context):
+    UK.check_among_every_language(question, phrase, reading, bounds, context)
+
+
+@pytest.mark.parametrize(PARAMS, all_cases(TABLES))
 def test_every_ukrainian_alternative_names_a_policy_that_selects_it_or_none(
         question, phrase, reading, bounds, value, alts, context):
     UK.alternatives_are_selected_by_their_policy(question, context)
@@ -672,6 +679,7 @@ DURATIONS = [
     ("D-uk-ponad-3-dni", "Задачі, відкриті понад 3 дні", "3 дні", "P3D"),
     ("D-uk-dovshe-nizh-dva-tyzhni", "Тікети висять довше ніж два тижні", "два тижні", "P2W"),
     ("D-uk-na-3-dni", "Заморозка на 3 дні", "на 3 дні", "P3D"),
+    ("D-uk-za-try-dni-within", "Зробили за три дні", "за три дні", "P3D"),
     ("D-uk-bilshe-24-hodyn", "Рев'ю триває більше 24 годин", "24 годин", "PT24H"),
 ]
 
