@@ -119,6 +119,7 @@ R1 = [
     case("R1-pl-przedwczoraj", "Co ponownie otwarto przedwczoraj?", "przedwczoraj", "R1",
          day(TODAY + D(days=-2))),
     case("R1-pl-na-pojutrze", "Jakie zadania są na pojutrze?", "na pojutrze", "R1", day(TODAY + D(days=2))),
+    case("R1-pl-na-dzien-dzisiejszy", "Stan na dzień dzisiejszy", "na dzień dzisiejszy", "R1", day(TODAY)),
     case("R1-pl-z-wczorajszego-dnia", "Raport z wczorajszego dnia", "z wczorajszego dnia", "R1",
          day(TODAY + D(days=-1))),
 ]
@@ -817,6 +818,10 @@ TRAPS = [
     ("N-pl-w-przyszlych-latach-plural-no-number", "W przyszłych latach to zmienimy"),
     ("N-pl-kolejny-tydzien-opoznienia", "To kolejny tydzień opóźnienia"),
     ("N-pl-rano-daily", "Rano mamy daily"),
+    ("N-pl-plan-na-tydzien", "Plan na tydzień"),
+    ("N-pl-pierwszy-tydzien-sprintu", "Pierwszy tydzień sprintu"),
+    ("N-pl-druga-polowa-dnia", "Druga połowa dnia wolna"),
+    ("N-pl-po-tygodniu", "Po tygodniu wrócimy do tematu"),
 ]
 
 

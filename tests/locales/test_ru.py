@@ -847,6 +847,12 @@ TRAPS = [
     ("N-ru-v-eti-dni", "В эти дни много багов"),
     ("N-ru-na-sleduyushchij-den-told-of", "На следующий день билд упал"),
     ("N-ru-sleduyushchego-dnya-told-of", "Исправили уже следующего дня"),
+    ("N-ru-zadachi-na-nedelyu-plan", "Задачи на неделю"),
+    ("N-ru-otchyot-za-mesyac", "Отчёт за месяц"),
+    ("N-ru-dobroe-utro", "Доброе утро, команда"),
+    ("N-ru-vtoraya-polovina-dnya", "Вторая половина дня свободна"),
+    ("N-ru-pervaya-nedelya-sprinta", "Первая неделя спринта"),
+    ("N-ru-v-10-utra-clock-time", "Созвон в 10 утра"),
 ]
 
 

@@ -823,6 +823,11 @@ TRAPS = [
     ("N-uk-pislya-obidu", "Після обіду дзвінок"),
     ("N-uk-zadacha-14", "Задача 14 у кого?"),
     ("N-uk-zachekaj-sekundu", "Зачекай секунду"),
+    ("N-uk-dobroho-ranku", "Доброго ранку, команда"),
+    ("N-uk-plan-na-tyzhden", "План на тиждень"),
+    ("N-uk-druha-polovyna-dnya", "Друга половина дня вільна"),
+    ("N-uk-pershyj-tyzhden-sprintu", "Перший тиждень спринту"),
+    ("N-uk-zvit-za-misyac", "Звіт за місяць"),
 ]
 
 
