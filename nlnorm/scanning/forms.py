@@ -22,6 +22,7 @@ from __future__ import annotations
 
 import functools
 import re
+from collections.abc import Iterable
 from dataclasses import dataclass
 
 from ..errors import LocaleError
@@ -108,6 +109,21 @@ _DIGIT_SAMPLES = {
 }
 _RUN = re.compile(r"[^\W\d_]+|\d+|[^\w\s]")
 _MAX_SAMPLES = 20_000
+#: Above this many first runs a form is filed by their first two letters (``"p:" + two``).
+MANY_KEYS = 64
+
+
+def _cat(heads: "Iterable[str]", tails: "Iterable[str]") -> list[str]:
+    """Every head followed by every tail, distinct, at most ``_MAX_SAMPLES`` of them (built
+    lazily: the full product of two word classes can be millions of strings)."""
+    tails = list(tails)
+    out: dict[str, None] = {}
+    for head in heads:
+        for tail in tails:
+            out[head + tail] = None
+            if len(out) >= _MAX_SAMPLES:
+                return list(out)
+    return list(out)
 
 
 def runs_key(text: str, pos: int = 0) -> tuple[str, str]:
@@ -134,7 +150,6 @@ def _runs2(sample: str) -> tuple[str, ...]:
     return tuple(f"#{min(len(r), 4)}" if r[0].isdigit() else r for r in runs)
 
 
-@functools.lru_cache(maxsize=4096)
 def _token_runs(samples: tuple[str, ...]) -> frozenset[tuple[str, ...]]:
     return frozenset(r for s in samples if (r := _runs2(s)))
 
@@ -142,25 +157,36 @@ def _token_runs(samples: tuple[str, ...]) -> frozenset[tuple[str, ...]]:
 def _sample_keys(token_samples: list[tuple[list[str], bool]]) -> set[tuple[str, str]] | None:
     """Every (first run, second run) a form can start with, from sample texts of its tokens
     (tokens are separated by white space, so runs never cross a token boundary); a second run
-    of ``""`` means the form may end after one run."""
+    of ``""`` means the form may end after one run. ``None`` when there are too many."""
+    # Only the tokens a form can start with need pairs: the first, and each one after a run
+    # of optional tokens; the others give only the second run.
+    head = 0
+    while head < len(token_samples) - 1 and token_samples[head][1]:
+        head += 1
     tokens = [(_token_runs(tuple(samples)), optional) for samples, optional in token_samples]
     # Walk from the last token back: firsts = runs a suffix can start with, pairs = its keys.
     firsts: frozenset[str] = frozenset({""})
     pairs: set[tuple[str, str]] = set()
-    for runs, optional in reversed(tokens):
+    for index in range(len(tokens) - 1, -1, -1):
+        runs, optional = tokens[index]
+        new_firsts: set[str] = {r[0] for r in runs}
         new_pairs: set[tuple[str, str]] = set()
-        new_firsts: set[str] = set()
-        for r in runs:
-            new_firsts.add(r[0])
-            if len(r) >= 2:
-                new_pairs.add((r[0], r[1]))
-            else:
-                new_pairs.update((r[0], f) for f in firsts)
+        if index <= head:
+            for r in runs:
+                if len(r) >= 2:
+                    new_pairs.add((r[0], r[1]))
+                else:
+                    if len(new_pairs) + len(firsts) > _MAX_SAMPLES:
+                        return None
+                    new_pairs.update((r[0], f) for f in firsts)
+            if optional:
+                new_pairs |= pairs
         if optional:
-            new_pairs |= pairs
             new_firsts |= firsts
         pairs, firsts = new_pairs, frozenset(new_firsts)
-    return pairs if len(pairs) <= _MAX_SAMPLES else None
+        if len(pairs) > _MAX_SAMPLES:
+            return None
+    return pairs
 
 
 def key_of(text: str) -> str:
@@ -278,9 +304,11 @@ def form_head(source: str, lex: Lexicon) -> FormHead:
                 if word and word.end() == len(lowered) and m.end() == len(body):
                     leaders.add(lowered)
             # The texts the whole token can be: a slot glued to a word makes one run of
-            # letters in scripts such as Hangul ("{dir}주" is "지난주").
-            words = [""]
-            for piece in _TOKEN_PIECE.finditer(body):
+            # letters in scripts such as Hangul ("{dir}주" is "지난주"). A token of one piece
+            # starts as that piece does, which the keys above already hold.
+            pieces_of_token = list(_TOKEN_PIECE.finditer(body))
+            words = [""] if len(pieces_of_token) > 1 or endings else []
+            for piece in pieces_of_token if words else ():
                 p_cls, p_choice, p_literal = piece.group(1), piece.group(2), piece.group(3)
                 if p_choice is not None:
                     texts = [fold(o) for o in p_choice.split("|") if o]
@@ -288,11 +316,22 @@ def form_head(source: str, lex: Lexicon) -> FormHead:
                     texts = list(_class_info(lex, p_cls).samples) if p_cls in lex.regex else [""]
                 else:
                     texts = [fold(p_literal)]
-                words = [a + b for a in words for b in texts][:_MAX_SAMPLES]
+                words = _cat(words, texts)
             words = [w for w in words if w]
+        if len(words) > MANY_KEYS:
+            # Thousands of texts (a number glued to a unit in Hangul): the scanner files such
+            # a form by their first two letters, so only those are kept.
+            keys |= {"p:" + w[:2] for w in words}
+        else:
             keys |= {key_of(w) for w in words}
         if endings and words and all(t.endswith("?") and len(t) > 1 for t in tokens[i + 1:]):
-            keys |= {key_of(w + e) for w in words for e in endings}
+            # Only a word that is one run can grow by an ending glued to it.
+            singles = [w for w in words if key_of(w) == w] if len(words) <= MANY_KEYS else words
+            if len(singles) * len(endings) <= MANY_KEYS * 8:
+                grown = {key_of(w + e) for w in singles for e in endings}
+                keys |= grown if len(grown) <= MANY_KEYS else {"p:" + k[:2] for k in grown}
+            else:
+                keys |= {"p:" + (w + endings[0])[:2] for w in singles}
         if not optional:
             break
     return FormHead(frozenset(keys), frozenset(chars), frozenset(leaders),
@@ -356,7 +395,7 @@ def compile_form(
                 if choice is not None:
                     # Options inside a token: "{year}'(te|de|ta|da)".
                     options = [fold(o) for o in choice.split("|") if o]
-                    samples = [a + o for a in samples for o in options][:_MAX_SAMPLES]
+                    samples = _cat(samples, options)
                     parts.append("(?:" + "|".join(re.escape(o) for o in sorted(options, key=len, reverse=True)) + ")")
                     bare = False
                     if first_piece:
@@ -370,7 +409,7 @@ def compile_form(
                         )
                     info = _class_info(lex, cls)
                     piece_samples = info.samples
-                    samples = [a + b for a in samples for b in piece_samples][:_MAX_SAMPLES]
+                    samples = _cat(samples, piece_samples)
                     group = f"f{order}_{len(slots)}"
                     slots.append((group, cls))
                     parts.append(f"(?P<{group}>{lex.regex[cls]})")
@@ -400,7 +439,7 @@ def compile_form(
         for i in range(len(token_samples)):
             if all(opt for _, opt in token_samples[i + 1:]):
                 samples_i, opt_i = token_samples[i]
-                grown = [t + e for t in samples_i for e in endings][:_MAX_SAMPLES]
+                grown = _cat(samples_i, endings)
                 token_samples[i] = (list(samples_i) + grown, opt_i)
                 if i == 0 or all(opt for _, opt in token_samples[:i]):
                     rx_i, optional_i, firsts_i, leaders_i, keys_i = pieces[i]

@@ -12,6 +12,7 @@ from __future__ import annotations
 import functools
 import re
 from collections import defaultdict
+from collections.abc import Iterable
 from dataclasses import dataclass, field
 from types import MappingProxyType
 from typing import Mapping
@@ -134,11 +135,15 @@ class Scanner:
         """The forms of ``table`` that can start with ``key``, compiled now."""
         if isinstance(key, tuple):
             first = key[0]
-            pending = table.get(first, ())
+            pending = table.get(first, ()) + table.get("p:" + first[:2], ())
         else:
             pending = table.get(key, ())
         out = []
+        seen: set[int] = set()
         for p in pending:
+            if p.order in seen:  # filed both by its first run and by its first two letters
+                continue
+            seen.add(p.order)
             form = p.form(self.lexicons, self._compiled)
             if isinstance(key, tuple):
                 pairs = form.pair_keys
@@ -171,6 +176,10 @@ class Pending:
             if cache is not None:
                 cache[self.order] = found
         return found
+
+
+#: Above this many first runs a form is filed by their first two letters.
+_MANY_KEYS = 64
 
 
 def _core(word: str) -> str:
@@ -434,7 +443,12 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
             lang_triggers[p.lang].add(trigger_word)
     for p, head in mine:
         if p.spaced:
-            for key in head.first_keys:
+            keys: Iterable[str] = head.first_keys
+            if len(keys) > _MANY_KEYS:
+                # A form that can start with thousands of words (a number glued to a unit in
+                # Hangul, words with endings) is filed by their first two letters instead.
+                keys = {k if k.startswith("p:") else "p:" + k[:2] for k in keys}
+            for key in keys:
                 curated[key].append(p)
         else:
             for ch in head.first_chars:
