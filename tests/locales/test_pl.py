@@ -430,6 +430,9 @@ R14 = [
 ]
 
 R15 = [
+    case("R15-pl-w-najblizszy-piatek-is-the-nearest-whatever-the-setting", "Demo w najbliższy piątek",
+         "w najbliższy piątek", "R15", day(strictly_after(TODAY, FR)),
+         alts=(alt("R16", None, day(in_week(TODAY, FR, 1))),)),
     case("R15-pl-w-przyszly-czwartek-is-tomorrow-nearest", "Co planujemy w przyszły czwartek",
          "w przyszły czwartek", "R15", day(strictly_after(TODAY, TH)),
          alts=(alt("R16", WEEK, day(in_week(TODAY, TH, 1))),), weekday_reading="nearest"),

@@ -14,7 +14,8 @@ Checked against:
 - the questions and phrases are written from knowledge of the language (no published source);
 - common practice (no published source): "в прошлый понедельник" / "в следующий четверг" mean
   that day of last / next week (locales/ru.toml ``weekday_reading = "week"``); "до X" ends
-  before X, "по X" and "вплоть до X" take X in; "с X по Y" and "между X и Y" take both ends
+  before X, "по X" (accusative) and "вплоть до X" take X in, "по X" with the dative ("по
+  прошлой неделе") is X itself; "с X по Y" and "между X и Y" take both ends
   in; "в 2 часа" is a clock time, not a length of time.
 """
 
@@ -150,6 +151,10 @@ R2 = [
          quarter_of(TODAY + D(months=-3)), "2026-Q3"),
     case("R2-ru-na-sleduyushchij-god", "Эпики на следующий год", "на следующий год", "R2",
          year(TODAY.year + 1), "2027"),
+    case("R2-ru-po-proshloj-nedele-dative-is-the-week", "Статистика по прошлой неделе",
+         "по прошлой неделе", "R2", ru_week(TODAY + D(weeks=-1))),
+    case("R2-ru-po-proshlomu-mesyacu-dative", "Отчёт по прошлому месяцу", "по прошлому месяцу", "R2",
+         month_of(TODAY + D(months=-1))),
     case("R2-ru-v-proshlom-godu", "Релизы в прошлом году", "в прошлом году", "R2", year(TODAY.year - 1)),
     case("R2-ru-s-etogo-mesyaca-inner", "Баги текущего месяца", "текущего месяца", "R2", month_of(TODAY)),
     case("R2-ru-na-proshloj-nedele-sunday-weeks-on-a-Sunday", "Тикеты, закрытые на прошлой неделе",
@@ -304,6 +309,8 @@ R10 = [
          alts=(alt("R10", _FUT, until(_MARCH_NEXT)),)),
     case("R10-ru-ne-pozdnee-15-marta-2026-goda", "Сдать не позднее 15 марта 2026 года",
          "не позднее 15 марта 2026 года", "R10", until(day(date(2026, 3, 15)))),
+    case("R10-ru-po-proshluyu-nedelyu-accusative", "Дежурства по прошлую неделю", "по прошлую неделю",
+         "R10", until(ru_week(TODAY + D(weeks=-1)))),
     case("R10-ru-po-2025-god", "Инциденты по 2025 год", "по 2025 год", "R10", until(year(2025))),
     case("R10-ru-k-koncu-marta", "Закрыть к концу марта", "к концу марта", "R10", until(_MARCH_PAST),
          alts=(alt("R10", _FUT, until(_MARCH_NEXT)),)),
@@ -450,6 +457,9 @@ R14 = [
 ]
 
 R15 = [
+    case("R15-ru-v-blizhajshuyu-pyatnicu-is-the-nearest-whatever-the-setting", "Демо в ближайшую пятницу",
+         "в ближайшую пятницу", "R15", day(strictly_after(TODAY, FR)),
+         alts=(alt("R16", None, day(in_week(TODAY, FR, 1))),)),
     case("R15-ru-v-sleduyushchij-chetverg-is-tomorrow-nearest", "Что запланировано в следующий четверг",
          "в следующий четверг", "R15", day(strictly_after(TODAY, TH)),
          alts=(alt("R16", _WEEK, day(in_week(TODAY, TH, 1))),), weekday_reading="nearest"),

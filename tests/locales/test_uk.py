@@ -426,6 +426,9 @@ R14 = [
 ]
 
 R15 = [
+    case("R15-uk-u-najblyzhchu-pyatnycyu-is-the-nearest-whatever-the-setting", "Демо у найближчу п'ятницю",
+         "у найближчу п'ятницю", "R15", day(strictly_after(TODAY, FR)),
+         alts=(alt("R16", None, day(in_week(TODAY, FR, 1))),)),
     case("R15-uk-nastupnoho-chetverha-is-tomorrow-nearest", "Що заплановано наступного четверга",
          "наступного четверга", "R15", day(strictly_after(TODAY, TH)),
          alts=(alt("R16", WEEK, day(in_week(TODAY, TH, 1))),), weekday_reading="nearest"),
