@@ -149,6 +149,8 @@ R2 = [
 ]
 
 R3 = [
+    case("R3-pl-pol-roku-temu-is-6-months", "Co zamknięto pół roku temu", "pół roku temu", "R3",
+         month_of(TODAY + D(months=-6)), (TODAY + D(months=-6)).strftime("%Y-%m")),
     case("R3-pl-3-dni-temu", "Błędy otwarte 3 dni temu", "3 dni temu", "R3", day(TODAY + D(days=-3))),
     case("R3-pl-piec-dni-temu", "Błędy otwarte pięć dni temu", "pięć dni temu", "R3", day(TODAY + D(days=-5))),
     case("R3-pl-dwa-tygodnie-temu", "Co się zepsuło dwa tygodnie temu", "dwa tygodnie temu", "R3",
@@ -180,6 +182,8 @@ _THIS_MONTH = TODAY.replace(day=1)
 _THIS_WEEK = week_start(TODAY)
 
 R5 = [
+    case("R5-pl-przez-ostatnie-pol-roku", "Incydenty przez ostatnie pół roku", "przez ostatnie pół roku",
+         "R5", (wall(NOW, months=-6), iso(NOW)), alts=(alt("R5", CAL, _cal_back(NOW, _THIS_MONTH, 6, "months")),)),
     case("R5-pl-w-ostatnich-7-dniach", "Błędy w ostatnich 7 dniach", "w ostatnich 7 dniach", "R5",
          (wall(NOW, days=-7), iso(NOW)), alts=(alt("R5", CAL, _cal_back(NOW, TODAY, 7, "days")),)),
     case("R5-pl-przez-ostatnie-trzy-dni", "Błędy przez ostatnie trzy dni", "przez ostatnie trzy dni",

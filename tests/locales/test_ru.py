@@ -163,6 +163,8 @@ R2 = [
 ]
 
 R3 = [
+    case("R3-ru-polgoda-nazad-is-6-months", "Что закрыли полгода назад", "полгода назад", "R3",
+         month_of(TODAY + D(months=-6)), (TODAY + D(months=-6)).strftime("%Y-%m")),
     case("R3-ru-3-dnya-nazad", "Баги, открытые 3 дня назад", "3 дня назад", "R3", day(TODAY + D(days=-3))),
     case("R3-ru-pyat-dnej-nazad", "Баги, открытые пять дней назад", "пять дней назад", "R3",
          day(TODAY + D(days=-5))),
@@ -181,6 +183,8 @@ R3 = [
 ]
 
 R4 = [
+    case("R4-ru-cherez-polchasa-is-30-minutes", "Что запустится через полчаса", "через полчаса", "R4",
+         (elapsed(NOW, minutes=30), elapsed(NOW, minutes=31))),
     case("R4-ru-cherez-3-dnya", "Что нужно сдать через 3 дня", "через 3 дня", "R4", day(TODAY + D(days=3))),
     case("R4-ru-cherez-dve-nedeli", "Что нужно сдать через две недели", "через две недели", "R4",
          ru_week(TODAY + D(weeks=2)), iso_week_name(TODAY + D(weeks=2))),
@@ -196,6 +200,10 @@ _THIS_MONTH = TODAY.replace(day=1)
 _THIS_WEEK = week_start(TODAY)
 
 R5 = [
+    case("R5-ru-za-poslednie-sutki", "Ошибки за последние сутки", "за последние сутки", "R5",
+         (wall(NOW, days=-1), iso(NOW)), alts=(alt("R5", _CAL, _cal_back(NOW, TODAY, 1, "days")),)),
+    case("R5-ru-za-poslednie-polgoda", "Инциденты за последние полгода", "за последние полгода", "R5",
+         (wall(NOW, months=-6), iso(NOW)), alts=(alt("R5", _CAL, _cal_back(NOW, _THIS_MONTH, 6, "months")),)),
     case("R5-ru-za-poslednie-7-dnej", "Баги за последние 7 дней", "за последние 7 дней", "R5",
          (wall(NOW, days=-7), iso(NOW)), alts=(alt("R5", _CAL, _cal_back(NOW, TODAY, 7, "days")),)),
     case("R5-ru-za-poslednie-tri-dnya", "Баги за последние три дня", "за последние три дня", "R5",

@@ -148,6 +148,8 @@ R2 = [
 ]
 
 R3 = [
+    case("R3-uk-pivroku-tomu-is-6-months", "Що закрили півроку тому", "півроку тому", "R3",
+         month_of(TODAY + D(months=-6)), (TODAY + D(months=-6)).strftime("%Y-%m")),
     case("R3-uk-3-dni-tomu", "Баги, відкриті 3 дні тому", "3 дні тому", "R3", day(TODAY + D(days=-3))),
     case("R3-uk-pyat-dniv-tomu-apostrophe", "Баги, відкриті п'ять днів тому", "п'ять днів тому", "R3",
          day(TODAY + D(days=-5))),
@@ -179,6 +181,8 @@ _THIS_MONTH = TODAY.replace(day=1)
 _THIS_WEEK = week_start(TODAY)
 
 R5 = [
+    case("R5-uk-za-ostanni-pivroku", "Інциденти за останні півроку", "за останні півроку", "R5",
+         (wall(NOW, months=-6), iso(NOW)), alts=(alt("R5", CAL, _cal_back(NOW, _THIS_MONTH, 6, "months")),)),
     case("R5-uk-za-ostanni-7-dniv", "Баги за останні 7 днів", "за останні 7 днів", "R5",
          (wall(NOW, days=-7), iso(NOW)), alts=(alt("R5", CAL, _cal_back(NOW, TODAY, 7, "days")),)),
     case("R5-uk-za-ostanni-try-dni", "Баги за останні три дні", "за останні три дні", "R5",
