@@ -2,6 +2,7 @@
 
 from __future__ import annotations
 
+import functools
 import re
 from bisect import bisect_right
 from typing import TYPE_CHECKING
@@ -71,7 +72,8 @@ def _marks(text: str, scanner: Scanner) -> tuple[list[int], list[int]]:
         if tok in trig:
             hits.append(at)
             continue
-        if endings and any(base in trig for base in _without_ending(tok, endings)):
+        if endings and (tok in scanner.glued_triggers or (not tok.isascii() and any(
+                base in trig for base in _without_ending(tok, endings)))):
             hits.append(at)
             continue
         if tok in lead:
@@ -81,9 +83,20 @@ def _marks(text: str, scanner: Scanner) -> tuple[list[int], list[int]]:
                 if ch.isdigit():
                     hits.append(at + i)  # "q3", "w48"
                     break
-    if scanner.unspaced_marks is not None:
-        for m in scanner.unspaced_marks.finditer(text):
-            (hits if m.lastgroup == "t" else leaders).append(m.start())
+    gate = scanner.unspaced_gate
+    if scanner.unspaced_marks is not None and gate is not None and gate.search(text):
+        # Languages without spaces: the (large) expression runs only where a character that
+        # can start one of their words stands; a question in another script skips it.
+        marks = scanner.unspaced_marks.match
+        end = -1
+        for g in gate.finditer(text):
+            at = g.start()
+            if at < end:
+                continue
+            m = marks(text, at)
+            if m is not None and m.end() > at:
+                (hits if m.lastgroup == "t" else leaders).append(at)
+                end = m.end()
         # A number glued after a word of a script written without spaces ("到2025-03-31").
         hits.extend(m.start() for m in _GLUED_NUMBER.finditer(text))
         hits.sort()
@@ -93,19 +106,29 @@ def _marks(text: str, scanner: Scanner) -> tuple[list[int], list[int]]:
 
 def _without_ending(tok: str, endings: tuple[str, ...]) -> set[str]:
     """``tok`` without one or two glued endings ("haftaki" -> "hafta", "지난주에는" -> "지난주"),
-    every way the endings can be cut off ("haftada" is "hafta" + "da", not "haft" + "a" + "da")."""
+    every way the endings can be cut off ("haftada" is "hafta" + "da", not "haft" + "a" + "da").
+    Cost grows with the length of the longest ending, not with the number of endings."""
+    table = _ending_table(endings)
+    known, lengths = table
     out: set[str] = set()
-    for ending in endings:
-        if tok.endswith(ending) and len(tok) > len(ending):
-            base = tok[: -len(ending)].rstrip("'")
-            if base:
-                out.add(base)
-            for second in endings:
-                if base.endswith(second) and len(base) > len(second):
-                    rest = base[: -len(second)].rstrip("'")
-                    if rest:
-                        out.add(rest)
+    for size in lengths:
+        if size >= len(tok) or tok[-size:] not in known:
+            continue
+        base = tok[:-size].rstrip("'")
+        if not base:
+            continue
+        out.add(base)
+        for second in lengths:
+            if second < len(base) and base[-second:] in known:
+                rest = base[:-second].rstrip("'")
+                if rest:
+                    out.add(rest)
     return out
+
+
+@functools.lru_cache(maxsize=16)
+def _ending_table(endings: tuple[str, ...]) -> tuple[frozenset[str], tuple[int, ...]]:
+    return frozenset(endings), tuple(sorted({len(e) for e in endings if e}))
 
 
 def _elided_start(text: str, k: int) -> int | None:

@@ -94,6 +94,8 @@ class Scanner:
     leader_words: frozenset[str]  # words that may start a form before a time word
     endings: tuple[str, ...]  # glued endings and postpositions, longest first ("ki", "부터")
     unspaced_marks: re.Pattern[str] | None  # triggers (group t) and leaders (group l)
+    unspaced_gate: re.Pattern[str] | None  # the characters those words can start with
+    glued_triggers: frozenset[str]  # time words with one glued ending ("haftaki", "지난주에")
     not_temporal: frozenset[str]  # words after which no number is a date, in any language
     curated: Mapping[object, tuple["Pending", ...]]  # by first run only; compiled on use
     generated: Mapping[object, tuple["Pending", ...]]
@@ -124,11 +126,21 @@ class Scanner:
         if curated and generated:
             # Two expressions, the longer match wins: in one alternation the first form that
             # matches would win ("last qtr" of a curated form over CLDR's "last qtr.").
-            first = _bucket(curated)
+            first = self._shared(curated)
             generated = [f for f in generated if not _covered(f, first)]
-            return (first, _bucket(generated)) if generated else (first,)
+            return (first, self._shared(generated)) if generated else (first,)
         forms = curated + generated
-        return (_bucket(forms),) if forms else ()
+        return (self._shared(forms),) if forms else ()
+
+    def _shared(self, forms: list[Form]) -> Bucket:
+        """The bucket of exactly these forms; keys with the same forms share one expression
+        ("3 дня назад" and "3 дней назад" start alike for the same forms)."""
+        signature = ("forms",) + tuple(sorted(f.order for f in forms))
+        found = self._cache.get(signature)
+        if found is None:
+            found = (_bucket(forms),)
+            self._cache[signature] = found
+        return found[0]
 
 
     def _forms(self, table: Mapping[object, tuple["Pending", ...]], key: object) -> list[Form]:
@@ -148,8 +160,10 @@ class Scanner:
             if isinstance(key, tuple):
                 pairs = form.pair_keys
                 if pairs is None:
-                    pairs = frozenset((k, "") for k in form.first_keys)
-                if key not in pairs:
+                    # Too many pairs to list: the form is tried wherever its first run fits.
+                    if key[1] or key[0] not in form.first_keys:
+                        continue
+                elif key not in pairs:
                     continue
             out.append(form)
         return out
@@ -176,6 +190,11 @@ class Pending:
             if cache is not None:
                 cache[self.order] = found
         return found
+
+
+def _gate(words: list[str]) -> re.Pattern[str]:
+    """One character class of the first characters of ``words``."""
+    return re.compile("[" + "".join(sorted({re.escape(w[0]) for w in words if w})) + "]")
 
 
 #: Above this many first runs a form is filed by their first two letters.
@@ -473,10 +492,12 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
     triggers = set(spaced) | set(unspaced)
     trigger_words = {_core(t) for t in spaced} - {""}
     endings: set[str] = set()
+    glued_words: set[str] = set()
     for lang, lex in lexicons.items():
         if lex.spaces and (lex.particles or lex.glue):
             endings |= set(lex.particles) | set(lex.glue)
             trigger_words |= {_core(t) for t in lang_triggers[lang] - quiet}
+            glued_words |= {_core(t) for t in set(lex.triggers) | lang_triggers[lang]} - quiet
     leader_words = {_core(w) for w in leaders_spaced if w not in triggers} - trigger_words - {""}
     unspaced_leaders = sorted(w for w in leaders_unspaced if w not in triggers)
     marks = None
@@ -489,6 +510,8 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
         leader_words=frozenset(leader_words),
         endings=tuple(sorted(endings, key=len, reverse=True)),
         unspaced_marks=marks,
+        unspaced_gate=_gate(unspaced + unspaced_leaders) if marks is not None else None,
+        glued_triggers=frozenset(t + e for t in glued_words for e in endings),
         not_temporal=frozenset(w for lex in lexicons.values() for w in lex.not_temporal),
         curated=MappingProxyType({k: tuple(v) for k, v in curated.items()}),
         generated=MappingProxyType({k: tuple(v) for k, v in generated.items()}),
