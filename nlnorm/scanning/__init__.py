@@ -22,6 +22,7 @@ __all__ = ["scan", "scan_text", "scanner_for", "Scanner"]
 
 # A word in any script: letters, digits and the combining marks that continue them.
 _TOKEN = re.compile(f"{WORD}+")
+_DIGIT = re.compile(r"\d")
 # A number right after a letter that is not a Latin one ("到2025", "以来3"), in languages written
 # without spaces; Latin letters before digits make ticket keys and versions ("v2", "q3").
 _GLUED_NUMBER = re.compile(r"(?<=[^\W\d_])(?<![a-zA-Z])\d")
@@ -60,6 +61,15 @@ def _marks(text: str, scanner: Scanner) -> tuple[list[int], list[int]]:
     trig = scanner.trigger_words
     lead = scanner.leader_words
     endings = scanner.endings
+    gate = scanner.unspaced_gate
+    # Most questions hold no time word at all: find that out with C-speed set operations
+    # before walking the words one by one.
+    words = _TOKEN.findall(text)
+    if trig.isdisjoint(words) and _DIGIT.search(text) is None and (
+            not endings or (scanner.glued_triggers.isdisjoint(words)
+                            and all(w.isascii() for w in words))) and (
+            gate is None or gate.search(text) is None):
+        return hits, leaders
     for m in _TOKEN.finditer(text):
         tok = m.group()
         at = m.start()

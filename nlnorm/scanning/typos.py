@@ -14,7 +14,7 @@ from __future__ import annotations
 
 import re
 from collections import defaultdict
-from dataclasses import dataclass, replace
+from dataclasses import dataclass, field, replace
 from types import MappingProxyType
 from typing import TYPE_CHECKING, Mapping
 
@@ -41,6 +41,7 @@ class TypoIndex:
     known: frozenset[str]
     heads: frozenset[str]  # first three letters of the time words
     tails: frozenset[str]  # last three letters
+    memo: dict[str, object] = field(default_factory=dict)  # word -> its correction (or None)
 
 
 def _deletions(word: str) -> set[str]:
@@ -119,24 +120,40 @@ def corrections(text: str, index: TypoIndex, taken: list[Span]) -> list[tuple[in
     """Words of ``text`` one edit from a time word: ``(start, end, time word)``, outside the
     spans already ``taken`` by exact phrases."""
     out: list[tuple[int, int, str]] = []
-    heads, tails, known, deletions = index.heads, index.tails, index.known, index.deletions
+    memo = index.memo
     for m in _WORD.finditer(text):
         word = m.group()
-        if word in known or (word[:3] not in heads and word[-3:] not in tails):
+        fix = memo.get(word, _UNSEEN)
+        if fix is _UNSEEN:
+            fix = _correction(word, index)
+            if len(memo) < _MEMO_SIZE:
+                memo[word] = fix
+        if fix is None:
             continue
         start, end = m.span()
         if any(s.start < end and start < s.end for s in taken):
             continue
-        found = set(deletions.get(word, ()))
-        for d in _deletions(word):
-            found |= deletions.get(d, frozenset())
-        found = {w for w in found if within_one_edit(word, w)}
-        if len(found) > 1:
-            same_start = {w for w in found if w[0] == word[0]}
-            found = same_start if len(same_start) == 1 else set()
-        if len(found) == 1:
-            out.append((start, end, found.pop()))
+        out.append((start, end, fix))  # type: ignore[arg-type]
     return out
+
+
+_UNSEEN = object()
+_MEMO_SIZE = 200_000  # words remembered per scanner (a question log repeats its vocabulary)
+
+
+def _correction(word: str, index: TypoIndex) -> str | None:
+    """The one time word ``word`` is one edit from, or ``None``."""
+    if word in index.known or (word[:3] not in index.heads and word[-3:] not in index.tails):
+        return None
+    deletions = index.deletions
+    found = set(deletions.get(word, ()))
+    for d in _deletions(word):
+        found |= deletions.get(d, frozenset())
+    found = {w for w in found if within_one_edit(word, w)}
+    if len(found) > 1:
+        same_start = {w for w in found if w[0] == word[0]}
+        found = same_start if len(same_start) == 1 else set()
+    return found.pop() if len(found) == 1 else None
 
 
 #: A corrected word this long may stand alone as a phrase ("yesterdy", "wendesday").
