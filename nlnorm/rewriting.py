@@ -8,23 +8,18 @@ or for times of day the exclusive end ("up to but not including 2026-12-02T12:00
 from __future__ import annotations
 
 import functools
-from datetime import datetime
+from datetime import datetime, timedelta
 from typing import TYPE_CHECKING
 
-from .calendars import start_of_day
 from .model import Interval, Kind, Reading, Resolved
 from .preparing import Prepared
-from .resolution.common import iso
+from .resolution.common import is_day_start, iso
 from .schema import Alternative, Mention, Reference, Result, Slot, Template, built
 
 if TYPE_CHECKING:
     from .context import Context
 
 __all__ = ["annotate", "explicit", "reference"]
-
-
-def _day_aligned(moment: datetime) -> bool:
-    return moment == start_of_day(moment.date(), moment.tzinfo)  # type: ignore[arg-type]
 
 
 def explicit(interval: Interval, kind: Kind = Kind.RANGE) -> str:
@@ -44,27 +39,21 @@ def explicit(interval: Interval, kind: Kind = Kind.RANGE) -> str:
     if kind is Kind.INSTANT and start is not None:
         return f"at {iso(start)}"
     if start is not None and end is not None:
-        if _day_aligned(start) and _day_aligned(end):
-            last = _last_day(end)
+        if is_day_start(start) and is_day_start(end):
+            last = end.date() - timedelta(days=1)
             if last <= start.date():
                 return f"on {start.date().isoformat()}"
             return f"from {start.date().isoformat()} to {last.isoformat()} inclusive"
         return f"from {iso(start)} up to but not including {iso(end)}"
     if start is not None:
-        if _day_aligned(start):
+        if is_day_start(start):
             return f"on or after {start.date().isoformat()}"
         return f"at or after {iso(start)}"
     if end is not None:
-        if _day_aligned(end):
+        if is_day_start(end):
             return f"before {end.date().isoformat()}"
         return f"before {iso(end)}"
     return "at any time"
-
-
-def _last_day(end: datetime):  # type: ignore[no-untyped-def]
-    from datetime import timedelta
-
-    return end.date() - timedelta(days=1)
 
 
 def _alternative(r: Reading) -> Alternative:

@@ -34,7 +34,7 @@ from ..model import (
 )
 from ..parsing import Parsed
 from . import absolute, relative
-from .common import Outcome, interval_value, iso, open_value, reading
+from .common import Outcome, interval_value, iso, reading
 
 if TYPE_CHECKING:
     from ..context import Context
@@ -101,8 +101,7 @@ def _bounded(m: Bounded, ctx: "Context", lang: str) -> Outcome | None:
             start, end = None, iv.start
         else:
             start, end = None, iv.end
-        day_aligned = iv.grain not in (Grain.SECOND, Grain.MINUTE, Grain.HOUR) and r.reading not in ("R5", "R6", "R21")
-        value = open_value(start, end, day_aligned)
+        value = interval_value(start, end)
         word = {"since": "from the start of", "after": "from the end of",
                 "before": "up to the start of", "until": "up to the end of"}[m.relation]
         return reading(Interval(start, end, iv.grain, value), rid,

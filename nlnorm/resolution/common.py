@@ -11,7 +11,7 @@ from ..model import Grain, Interval, Reading
 if TYPE_CHECKING:
     from ..context import Context
 
-__all__ = ["dates", "instants", "reading", "iso", "open_value", "interval_value", "is_day_start",
+__all__ = ["dates", "instants", "reading", "iso", "interval_value", "is_day_start",
            "WEEKDAY_NAMES", "Outcome"]
 
 WEEKDAY_NAMES = ("Monday", "Tuesday", "Wednesday", "Thursday", "Friday", "Saturday", "Sunday")
@@ -70,11 +70,6 @@ def interval_value(start: datetime | None, end: datetime | None) -> str:
     return f"{iso(start)}/{iso(end)}"
 
 
-def open_value(start: datetime | None, end: datetime | None, day_aligned: bool = True) -> str:
-    """The value of a half-bounded interval (see :func:`interval_value`)."""
-    return interval_value(start, end)
-
-
 def reading(interval: Interval, rid: str, note: str, policy: str | None = None) -> Reading:
     return Reading(interval, rid, note, policy)
 
@@ -82,6 +77,3 @@ def reading(interval: Interval, rid: str, note: str, policy: str | None = None) 
 def week_name(ctx: "Context") -> str:
     return f"weeks start on {ctx.week_start}"
 
-
-def day_after(d: date, n: int = 1) -> date:
-    return d + timedelta(days=n)
