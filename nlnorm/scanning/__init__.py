@@ -23,6 +23,9 @@ __all__ = ["scan", "scan_text", "scanner_for", "Scanner"]
 # A word in any script: letters, digits and the combining marks that continue them.
 _TOKEN = re.compile(f"{WORD}+")
 _DIGIT = re.compile(r"\d")
+# A number that starts a word, not inside a number ("2025.1") or after a key ("WRN-2025").
+_LATIN_AFTER_NUMBER = re.compile(r"\d+ *(?:[a-z]|$)")
+_FREE_NUMBER = re.compile(r"(?<![\w.,:/#])(?<![^\W\d_]-)\d")
 # A number right after a letter that is not a Latin one ("到2025", "以来3"), in languages written
 # without spaces; Latin letters before digits make ticket keys and versions ("v2", "q3").
 _GLUED_NUMBER = re.compile(r"(?<=[^\W\d_])(?<![a-zA-Z])\d")
@@ -52,54 +55,75 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     return tuple(sorted(exact + fuzzy, key=lambda c: c.span.start))
 
 
-def _marks(text: str, scanner: Scanner) -> tuple[list[int], list[int]]:
+def _marks(text: str, scanner: Scanner, words: list[str] | None = None) -> tuple[list[int], list[int]]:
     """Positions of trigger words and of leading words, in one pass over the words of
     ``text`` (set lookups: no expression over every word of every language to compile), plus
-    the expression of the languages written without spaces."""
+    the expression of the languages written without spaces.
+
+    What each word is (trigger, leader, number, nothing) is remembered per scanner, so a
+    question whose words are all known non-triggers leaves after a few set operations."""
     hits: list[int] = []
     leaders: list[int] = []
-    trig = scanner.trigger_words
-    lead = scanner.leader_words
-    endings = scanner.endings
+    if words is None:
+        words = _TOKEN.findall(text)
+    kinds, hot, lead, letter_gate = _state(scanner)
+    present = set(words)
+    new = present.difference(kinds)
+    extra: dict[str, int] = {}  # words met when the memory is full: looked at every time
+    if new:
+        room = len(kinds) < _KINDS_SIZE
+        for word in new:
+            kind = _kind(word, scanner)
+            if room:
+                kinds[word] = kind
+                if kind == _LEADER:
+                    lead.add(word)
+                elif kind:
+                    hot.add(word)
+            elif kind:
+                extra[word] = kind
+    found = hot.intersection(present)
+    found.update(w for w, k in extra.items() if k != _LEADER)
     gate = scanner.unspaced_gate
-    # Most questions hold no time word at all: find that out with C-speed set operations
-    # before walking the words one by one.
-    words = _TOKEN.findall(text)
-    if trig.isdisjoint(words) and _DIGIT.search(text) is None and (
-            not endings or (scanner.glued_triggers.isdisjoint(words)
-                            and all(w.isascii() for w in words))) and (
-            gate is None or gate.search(text) is None):
-        return hits, leaders
-    for m in _TOKEN.finditer(text):
-        tok = m.group()
-        at = m.start()
-        if tok[0].isdigit():
-            prev = text[at - 1] if at else " "
-            # Not inside a number ("2025.1") or a ticket key ("WRN-2025": common practice).
-            if prev not in ".,:/#" and not (prev == "-" and at > 1 and text[at - 2].isalpha()):
-                hits.append(at)
-            continue
-        if tok in trig:
-            hits.append(at)
-            continue
-        if endings and (tok in scanner.glued_triggers or (not tok.isascii() and any(
-                base in trig for base in _without_ending(tok, endings)))):
-            hits.append(at)
-            continue
-        if tok in lead:
-            leaders.append(at)
-        elif not tok.isalpha():
-            for i, ch in enumerate(tok):
-                if ch.isdigit():
-                    hits.append(at + i)  # "q3", "w48"
-                    break
-    gate = scanner.unspaced_gate
-    if scanner.unspaced_marks is not None and gate is not None and gate.search(text):
+    gated = gate is not None and letter_gate.search(text) is not None
+    if not gated and (not found or (_FREE_NUMBER.search(text) is None and all(
+            w[0].isdigit() for w in found))):
+        return hits, leaders  # no time word, and every number is part of a key or a version
+    size = len(text)
+    for word in found:
+        kind = kinds.get(word) or extra[word]
+        at = text.find(word)
+        while at >= 0:
+            end = at + len(word)
+            if (not at or not _continues(text[at - 1])) and (end == size or not _continues(text[end])):
+                if kind == _NUMBER:
+                    prev = text[at - 1] if at else " "
+                    # Not inside a number ("2025.1") or a ticket key ("WRN-2025": common practice).
+                    if prev not in ".,:/#" and not (prev == "-" and at > 1 and text[at - 2].isalpha()):
+                        hits.append(at)
+                elif kind == _TRIGGER:
+                    hits.append(at)
+                else:
+                    hits.append(at + kind - _DIGIT_AT)  # "q3", "w48"
+            at = text.find(word, at + 1)
+    if hits or gated:
+        leading = lead.intersection(present)
+        leading.update(w for w, k in extra.items() if k == _LEADER)
+        for word in leading:
+            at = text.find(word)
+            while at >= 0:
+                end = at + len(word)
+                if (not at or not _continues(text[at - 1])) and (end == size or not _continues(text[end])):
+                    leaders.append(at)
+                at = text.find(word, at + 1)
+        hits.sort()
+        leaders.sort()
+    if gated and scanner.unspaced_marks is not None:
         # Languages without spaces: the (large) expression runs only where a character that
         # can start one of their words stands; a question in another script skips it.
         marks = scanner.unspaced_marks.match
         end = -1
-        for g in gate.finditer(text):
+        for g in gate.finditer(text):  # type: ignore[union-attr]
             at = g.start()
             if at < end:
                 continue
@@ -111,7 +135,67 @@ def _marks(text: str, scanner: Scanner) -> tuple[list[int], list[int]]:
         hits.extend(m.start() for m in _GLUED_NUMBER.finditer(text))
         hits.sort()
         leaders.sort()
+    elif gate is not None and hits and _DIGIT.search(text) is not None:
+        # A number that starts a phrase of a language without spaces ("3天前", "2025年").
+        marks = scanner.unspaced_marks.match  # type: ignore[union-attr]
+        for at in list(hits):
+            m = marks(text, at) if text[at].isdigit() else None
+            if m is not None and m.end() > at and m.lastgroup != "t":
+                leaders.append(at)
+        if not text.isascii():
+            hits.extend(m.start() for m in _GLUED_NUMBER.finditer(text))
+            hits = sorted(set(hits))
+        leaders.sort()
     return hits, leaders
+
+
+# What a word of a question is to the scanner (see _kind); "q3" is _DIGIT_AT + 1.
+_NOTHING, _TRIGGER, _LEADER, _NUMBER, _DIGIT_AT = 0, 1, 2, 3, 4
+_KINDS_SIZE = 200_000  # words remembered per scanner (a question log repeats its vocabulary)
+_State = tuple[dict[str, int], set[str], set[str], re.Pattern[str]]
+
+
+def _continues(ch: str) -> bool:
+    """:func:`is_word_char`, quicker for the common case of a space or a letter."""
+    return ch.isalnum() or ch == "_" or (not ch.isascii() and is_word_char(ch))
+
+
+def _state(scanner: Scanner) -> _State:
+    """What the words met so far are to ``scanner``: every word's kind, the words that
+    trigger, the words that lead, and the gate of letters of the languages without spaces."""
+    found = scanner._cache.get("words")
+    if found is None:
+        gate = scanner.unspaced_gate
+        # Digits are found as words of their own; the gate looks for the letters only.
+        letters = re.compile(re.sub(r"[0-9]", "", gate.pattern)) if gate is not None else _NEVER
+        if letters.pattern in ("[]", ""):
+            letters = _NEVER
+        found = ({}, set(), set(), letters)
+        scanner._cache["words"] = found  # type: ignore[assignment]
+    return found  # type: ignore[return-value]
+
+
+_NEVER = re.compile(r"(?!)")
+
+
+def _kind(tok: str, scanner: Scanner) -> int:
+    """What the word ``tok`` of a question is: a trigger, a leading word, a number (whether it
+    triggers depends on the character before it), a word holding a digit ("q3"), or nothing."""
+    if tok[0].isdigit():
+        return _NUMBER
+    if tok in scanner.trigger_words:
+        return _TRIGGER
+    endings = scanner.endings
+    if endings and (tok in scanner.glued_triggers or (not tok.isascii() and any(
+            base in scanner.trigger_words for base in _without_ending(tok, endings)))):
+        return _TRIGGER
+    if tok in scanner.leader_words:
+        return _LEADER
+    if not tok.isalpha():
+        for i, ch in enumerate(tok):
+            if ch.isdigit():
+                return _DIGIT_AT + i
+    return _NOTHING
 
 
 def _without_ending(tok: str, endings: tuple[str, ...]) -> set[str]:
@@ -152,9 +236,15 @@ def _elided_start(text: str, k: int) -> int | None:
     return None
 
 
-def _scan_exact(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
+def _scan_exact(prepared: Prepared, scanner: Scanner,
+                near: tuple[tuple[int, int], ...] | None = None) -> tuple[Candidate, ...]:
+    """The exact phrases of a prepared text; with ``near``, only phrases that may cover one of
+    those spans (used after correcting typos: a phrase must hold a corrected word)."""
     text = prepared.text
     hits, leaders = _marks(text, scanner)
+    if near is not None:
+        back = scanner.lookback
+        hits = [h for h in hits if any(s - back <= h < e + back for s, e in near)]
     if not hits:
         return ()
     # A language with marks (kana: Japanese) wins ties when the question holds one, and loses
@@ -209,7 +299,10 @@ def _scan_exact(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
                 keys.append((first, second))
                 if second:
                     keys.append((first, ""))
-        if unspaced:
+        if unspaced and not (text[pos].isdigit() and _LATIN_AFTER_NUMBER.match(text, pos)):
+            # A number followed by a Latin word or the end ("10 issues") starts no phrase of
+            # a language written without spaces: their numbers are followed by their own
+            # script, a separator or a time ("3天", "2025年", "10:00").
             keys.append("c:" + text[pos])
         best = None
         best_end = -1

@@ -42,6 +42,7 @@ class TypoIndex:
     heads: frozenset[str]  # first three letters of the time words
     tails: frozenset[str]  # last three letters
     memo: dict[str, object] = field(default_factory=dict)  # word -> its correction (or None)
+    fixable: set[str] = field(default_factory=set)  # the words of memo that have a correction
 
 
 def _deletions(word: str) -> set[str]:
@@ -121,13 +122,22 @@ def corrections(text: str, index: TypoIndex, taken: list[Span]) -> list[tuple[in
     spans already ``taken`` by exact phrases."""
     out: list[tuple[int, int, str]] = []
     memo = index.memo
+    words = set(_WORD.findall(text))
+    fixable = index.fixable
+    extra: dict[str, str] = {}  # corrections of words met when the memory is full
+    for word in words.difference(memo):
+        fix = _correction(word, index)
+        if len(memo) < _MEMO_SIZE:
+            memo[word] = fix
+            if fix is not None:
+                fixable.add(word)
+        elif fix is not None:
+            extra[word] = fix
+    if fixable.isdisjoint(words) and not extra:
+        return out  # the common case: no word of the question is a known misspelling
     for m in _WORD.finditer(text):
         word = m.group()
-        fix = memo.get(word, _UNSEEN)
-        if fix is _UNSEEN:
-            fix = _correction(word, index)
-            if len(memo) < _MEMO_SIZE:
-                memo[word] = fix
+        fix = memo.get(word) or extra.get(word)
         if fix is None:
             continue
         start, end = m.span()
@@ -221,7 +231,13 @@ def typo_candidates(prepared: Prepared, scanner: "Scanner", exact: tuple[Candida
     if not fixes:
         return ()
     fixed, back = corrected(prepared, fixes)
-    found = scan_exact(fixed, scanner)
+    # A phrase found after correcting must hold a corrected word: only the forms that start
+    # at or before one (within the scanner's lookback) are tried.
+    where: dict[int, int] = {}
+    for new, old in enumerate(back):
+        where.setdefault(old, new)
+    near = tuple((where[s], where[e]) for s, e, _ in fixes)
+    found = scan_exact(fixed, scanner, near)
     out = []
     for c in found:
         covered = [f for f in fixes if back[c.span.start] <= f[0] and f[1] <= back[c.span.end - 1] + 1]
