@@ -7,6 +7,7 @@ mention's ``char_start``/``char_end`` always index the caller's string.
 
 from __future__ import annotations
 
+import re
 import unicodedata
 from dataclasses import dataclass
 
@@ -24,6 +25,8 @@ _TRANSLATE = str.maketrans(
         "\u00a0": " ", "\u202f": " ", "\u2009": " ", "\t": " ", "\n": " ", "\r": " ",
     }
 )
+
+_UNIFIED = re.compile("[" + "".join(chr(c) for c in _TRANSLATE) + "]")
 
 
 @dataclass(frozen=True, slots=True)
@@ -73,7 +76,9 @@ def prepare(text: str) -> Prepared:
     if unicodedata.is_normalized("NFKC", text):
         folded = text.casefold()
         if len(folded) == len(text):
-            return Prepared(original, folded.translate(_TRANSLATE), None)
+            if _UNIFIED.search(folded) is not None:  # translate() is slow on non-ASCII text
+                folded = folded.translate(_TRANSLATE)
+            return Prepared(original, folded, None)
     pieces: list[str] = []
     offsets: list[int] = []
     for index, ch in enumerate(text):

@@ -184,29 +184,34 @@ def _vouched(text: str, start: int, end: int, covered: list[tuple[int, int, str]
     return any(ch.isalnum() for ch in rest)
 
 
-def corrected(prepared: Prepared, fixes: list[tuple[int, int, str]]) -> tuple[Prepared, list[int]]:
-    """The prepared text with each word replaced, and for every character of the new text the
-    index of the character of ``prepared.text`` it stands for (plus one entry for the end)."""
+def corrected(prepared: Prepared, fixes: list[tuple[int, int, str]]
+              ) -> tuple[Prepared, list[int], tuple[tuple[int, int], ...]]:
+    """The prepared text with each word replaced; for every character of the new text the
+    index of the character of ``prepared.text`` it stands for (plus one entry for the end);
+    and where each replacement stands in the new text. The new text is only scanned: its
+    phrases are mapped back with that index, so it needs no map to the original."""
     text = prepared.text
     pieces: list[str] = []
     back: list[int] = []
+    spans: list[tuple[int, int]] = []
     cursor = 0
+    size_so_far = 0
     for start, end, word in fixes:
         pieces.append(text[cursor:start])
         back.extend(range(cursor, start))
+        size_so_far += start - cursor
         pieces.append(word)
         # Every letter of the replacement maps into the misspelt word, first onto its first
         # letter and last onto its last, so a phrase covering one covers the other.
         span, size = end - start, len(word)
         back.extend(start + (i * (span - 1)) // max(size - 1, 1) for i in range(size))
+        spans.append((size_so_far, size_so_far + size))
+        size_so_far += size
         cursor = end
     pieces.append(text[cursor:])
     back.extend(range(cursor, len(text)))
     back.append(len(text))
-    new_text = "".join(pieces)
-    original_index = [prepared.to_original(i, i + 1)[0] if i < len(text) else len(prepared.original)
-                      for i in back]
-    return Prepared(prepared.original, new_text, tuple(original_index)), back
+    return Prepared(prepared.original, "".join(pieces), None), back, tuple(spans)
 
 
 def mapped(c: Candidate, back: list[int], note: str) -> Candidate:
@@ -230,13 +235,9 @@ def typo_candidates(prepared: Prepared, scanner: "Scanner", exact: tuple[Candida
     fixes = corrections(prepared.text, index, [c.span for c in exact])
     if not fixes:
         return ()
-    fixed, back = corrected(prepared, fixes)
+    fixed, back, near = corrected(prepared, fixes)
     # A phrase found after correcting must hold a corrected word: only the forms that start
-    # at or before one (within the scanner's lookback) are tried.
-    where: dict[int, int] = {}
-    for new, old in enumerate(back):
-        where.setdefault(old, new)
-    near = tuple((where[s], where[e]) for s, e, _ in fixes)
+    # near one (within the scanner's lookback) are tried.
     found = scan_exact(fixed, scanner, near)
     out = []
     for c in found:
