@@ -38,6 +38,7 @@ __all__ = [
     "RelativePattern",
     "extract_language",
     "extract_locales",
+    "extract_digest",
     "write_cache",
 ]
 
@@ -100,6 +101,19 @@ def _cached_locales() -> dict[str, Any] | None:
     if not path.is_file():
         return None
     return json.loads(path.read_text(encoding="utf-8"))
+
+
+@functools.cache
+def extract_digest(lang: str) -> str | None:
+    """The SHA-256 of ``locales/_cldr/<lang>.json`` (line ends unified), or ``None`` when
+    there is no extract of the language: what data generated from it is keyed by."""
+    import hashlib
+
+    try:
+        data = (_cache_dir() / f"{lang}.json").read_bytes()
+    except OSError:
+        return None
+    return hashlib.sha256(data.replace(b"\r\n", b"\n")).hexdigest()
 
 
 def _language(lang: str) -> dict[str, Any]:

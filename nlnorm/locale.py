@@ -4,11 +4,20 @@ Each language has one TOML file holding the grammar CLDR lacks (connectives, num
 phrase forms, look-alike words). :func:`load_locale` validates it with pydantic (unknown keys are
 errors), merges the parent chain (``en_GB -> en -> root``) into new frozen objects and caches the
 result; cached data is never changed afterwards.
+
+Parsing TOML is most of the cost of loading a file, so ``locales/_parsed/<code>.json`` keeps each
+file already parsed, with the SHA-256 of the text it was parsed from, and the scanner's data of
+the language (its lexicon and how its forms start, see ``scanning.lexicon.stored_index``).
+``python -m nlnorm.locale`` writes them; ``tests/locales/test_parsed_extract.py`` checks they
+are current. A file whose text no longer has the recorded hash (a locale file just edited) is
+parsed from its TOML, so an edit takes effect at once, only a little slower.
 """
 
 from __future__ import annotations
 
 import functools
+import hashlib
+import json
 import tomllib
 from pathlib import Path
 from types import MappingProxyType
@@ -20,7 +29,7 @@ from .errors import LocaleError, suggest
 from .preparing import fold
 
 __all__ = ["LocaleData", "load_locale", "available_languages", "locales_dir", "Example",
-           "cldr_tier_code", "deep_languages"]
+           "cldr_tier_code", "deep_languages", "write_extract"]
 
 RELATIONS = (
     "since",
@@ -176,13 +185,19 @@ class LocaleData:
                  "units", "direction", "relative_day", "day_period_phrases", "weekend",
                  "to_date", "connectives", "ambiguous", "not_temporal", "quiet", "forms", "root_forms",
                  "inflections",
-                 "examples")
+                 "examples", "digest", "generated")
 
-    def __init__(self, code: str, chain: tuple[str, ...], files: list[LocaleFile]) -> None:
+    def __init__(self, code: str, chain: tuple[str, ...], files: list[LocaleFile],
+                 digest: str | None = None, generated: Mapping[str, Any] | None = None) -> None:
         own = files[0]
         self.code = code
         self.chain = chain
         self.meta = own.meta
+        # The SHA-256 of the texts of every file of the chain (None for CLDR data alone), and
+        # the scanner's data of the language kept in locales/_parsed/ (not checked here: its
+        # reader compares its key, see scanning.lexicon.stored_index).
+        self.digest = digest
+        self.generated = generated
 
         def merged(attr: str) -> Mapping[str, Any]:
             out: dict[str, Any] = {}
@@ -228,20 +243,55 @@ class LocaleData:
         return f"LocaleData({self.code!r}, chain={self.chain!r})"
 
 
+def _parsed_path(path: Path) -> Path:
+    """Where the parsed extract of the locale file ``path`` is kept."""
+    return path.parent / "_parsed" / f"{path.stem}.json"
+
+
+def _digest(text: str) -> str:
+    return hashlib.sha256(text.encode("utf-8")).hexdigest()
+
+
+def _stored(path: Path, digest: str) -> dict[str, Any] | None:
+    """The parsed extract of ``path`` if it was made from the text with ``digest``."""
+    try:
+        stored = json.loads(_parsed_path(path).read_text(encoding="utf-8"))
+    except (OSError, ValueError):
+        return None
+    if not isinstance(stored, dict) or stored.get("toml_sha256") != digest:
+        return None
+    return stored
+
+
 @functools.lru_cache(maxsize=256)
-def _read(path: Path) -> LocaleFile:
+def _load(path: Path) -> tuple[LocaleFile, str, Mapping[str, Any] | None]:
+    """The validated file, the digest of its text, and the generated scanner data kept with
+    its parsed extract (``None`` when there is none for this text)."""
     rel = f"locales/{path.name}"
+    text = path.read_text(encoding="utf-8")
+    digest = _digest(text)
+    stored = _stored(path, digest)
+    if stored is not None:
+        raw = stored["data"]
+    else:
+        try:
+            raw = tomllib.loads(text)
+        except tomllib.TOMLDecodeError as exc:
+            raise LocaleError(f"{rel} is not valid TOML: {exc}") from None
     try:
-        raw = tomllib.loads(path.read_text(encoding="utf-8"))
-    except tomllib.TOMLDecodeError as exc:
-        raise LocaleError(f"{rel} is not valid TOML: {exc}") from None
-    try:
-        return LocaleFile.model_validate(raw)
+        data = LocaleFile.model_validate(raw)
     except ValidationError as exc:
         err = exc.errors()[0]
         where = " ".join(f"[{p}]" if i == 0 else str(p) for i, p in enumerate(err["loc"]))
         got = err.get("input")
         raise LocaleError(f"{rel} {where}: {err['msg'].lower()}, got {got!r}") from None
+    generated = stored.get("index") if stored is not None else None
+    return data, digest, MappingProxyType(generated) if isinstance(generated, dict) else None
+
+
+def _read(path: Path) -> LocaleFile:
+    """The validated locale file ``path`` (read once)."""
+    return _load(path)[0]
 
 
 def _cldr_only(code: str) -> LocaleFile | None:
@@ -301,14 +351,20 @@ def load_locale(code: str) -> LocaleData:
     base = locales_dir()
     chain: list[str] = []
     files: list[LocaleFile] = []
+    digests: list[str | None] = []
+    generated: Mapping[str, Any] | None = None
     current = code
     while current:
         if current in chain:
             raise LocaleError(f"locales/{current}.toml: parent chain loops ({' -> '.join(chain)})")
         path = base / f"{current}.toml"
         if path.is_file():
-            data = _read(path)
+            data, digest, stored = _load(path)
+            digests.append(digest)
+            if not chain:
+                generated = stored
         else:
+            digests.append(None)
             data = _cldr_only(current)
             if data is None:
                 known = available_languages()
@@ -320,10 +376,63 @@ def load_locale(code: str) -> LocaleData:
         chain.append(current)
         files.append(data)
         current = data.meta.parent if current != "root" else ""
-    return LocaleData(code, tuple(chain), files)
+    digest = None
+    if all(digests):
+        digest = _digest(" ".join(f"{name}:{d}" for name, d in zip(chain, digests)))
+    return LocaleData(code, tuple(chain), files, digest, generated if digest else None)
 
 
 def deep_languages() -> tuple[str, ...]:
     """The languages with a locale file, English first: the default languages to look for."""
     langs = sorted(available_languages())
     return tuple(["en"] + [lang for lang in langs if lang != "en"]) if "en" in langs else tuple(langs)
+
+
+def _json_lines(value: Any, depth: int = 0) -> str:
+    """``value`` as JSON with one member per line down to the entries of the tables (a form,
+    a word class, a section of the file), each entry compact on its line."""
+    if depth >= 4 or not isinstance(value, (dict, list)) or not value:
+        return json.dumps(value, ensure_ascii=False, separators=(",", ":"))
+    if isinstance(value, dict):
+        items = [json.dumps(k, ensure_ascii=False) + ":" + _json_lines(v, depth + 1)
+                 for k, v in value.items()]
+        return "{\n" + ",\n".join(items) + "\n}"
+    return "[\n" + ",\n".join(_json_lines(v, depth + 1) for v in value) + "\n]"
+
+
+def write_extract() -> list[Path]:
+    """Write ``locales/_parsed/<code>.json`` for root and every language: the file parsed, the
+    hash of its text, and for a language the scanner's data of it (computed afresh, see
+    ``scanning.scanner.language_index``). Returns the paths written; extracts of files that are
+    gone are removed."""
+    from .scanning.scanner import language_index
+
+    base = locales_dir()
+    folder = base / "_parsed"
+    folder.mkdir(exist_ok=True)
+    languages = available_languages()
+    written = []
+    for path in sorted(base.glob("*.toml")):
+        if path.stem.startswith("_"):
+            continue
+        _read(path)  # the file must follow the format (the error names the section and key)
+        text = path.read_text(encoding="utf-8")
+        entry: dict[str, Any] = {"toml_sha256": _digest(text), "data": tomllib.loads(text)}
+        if path.stem in languages:
+            index = language_index(path.stem)
+            if index is not None:
+                entry["index"] = index
+        out = _parsed_path(path)
+        out.write_text(_json_lines(entry) + "\n", encoding="utf-8")
+        written.append(out)
+    for stale in folder.glob("*.json"):
+        if stale not in written:
+            stale.unlink()
+    return written
+
+
+if __name__ == "__main__":
+    from nlnorm import locale as _module  # the package's module, not this __main__ copy
+
+    for _path in _module.write_extract():
+        print(f"wrote {_path}")

@@ -1,22 +1,26 @@
 """Word classes of one language: CLDR words from babel plus the grammar in locales/.
 
 A lexicon maps each slot class of the form language (``{month}``, ``{unit}``, ``{dir}``...) to
-its words and their values. It is built once per language and cached.
+its words and their values. It is built once per language and cached: from the generated data
+in ``locales/_parsed/`` when that was computed from the current files (:func:`stored_index`),
+else from CLDR and the locale file.
 """
 
 from __future__ import annotations
 
 import functools
+import hashlib
 import re
 from dataclasses import dataclass
 from types import MappingProxyType
-from typing import Mapping
+from typing import Any, Mapping
 
 from .. import cldr
 from ..locale import POST_RELATIONS, load_locale
 from ..preparing import fold
 
-__all__ = ["Lexicon", "lexicon", "trie_regex", "REGEX_CLASSES", "collapse"]
+__all__ = ["Lexicon", "lexicon", "trie_regex", "REGEX_CLASSES", "collapse", "stored_index",
+           "fresh_lexicon", "lexicon_words"]
 
 # Slot classes matched by a regular expression rather than a word list. ``day`` gets the
 # language's ordinal suffixes appended when the lexicon is built.
@@ -192,9 +196,9 @@ def _longest_token(word: str) -> str:
     return max(word.split(), key=len) if word.split() else word
 
 
-@functools.cache
-def lexicon(lang: str) -> Lexicon:
-    """Build (once) the lexicon of ``lang`` from CLDR via babel and ``locales/<lang>.toml``."""
+def lexicon_words(lang: str) -> dict[str, dict[str, object]]:
+    """The word classes of ``lang`` (``{cls: {word: value}}``) from CLDR via babel and
+    ``locales/<lang>.toml``, computed afresh."""
     data = load_locale(lang)
     words: dict[str, dict[str, object]] = {}
 
@@ -267,25 +271,32 @@ def lexicon(lang: str) -> Lexicon:
     for name, forms in data.direction.items():
         for form in forms:
             put("dir", form, offsets[name])
-    for word in data.weekend:
+    for word in sorted(data.weekend):  # a set: sorted, so that the table is the same every run
         put("weekend", word, True)
     for word, grain in data.to_date.items():
         put("to_date", word, grain)
+    return words
 
-    suffixes = data.ordinal_suffixes
-    sep = r"\s+" if data.meta.spaces else r"\s*"
-    regex = Patterns(words, sep, tuple(suffixes))
 
+def _triggers(words: Mapping[str, Mapping[str, object]]) -> frozenset[str]:
     triggers: set[str] = set()
     for cls in TRIGGER_CLASSES:
         for word in words.get(cls, {}):
             triggers.add(_longest_token(word))
+    return frozenset(triggers)
+
+
+def _build(lang: str, words: dict[str, dict[str, object]], triggers: frozenset[str]) -> Lexicon:
+    data = load_locale(lang)
+    suffixes = data.ordinal_suffixes
+    sep = r"\s+" if data.meta.spaces else r"\s*"
+    regex = Patterns(words, sep, tuple(suffixes))
     return Lexicon(
         lang=lang,
         spaces=data.meta.spaces,
         words=MappingProxyType({k: MappingProxyType(v) for k, v in words.items()}),
         regex=regex,
-        triggers=frozenset(triggers),
+        triggers=triggers,
         ambiguous=data.ambiguous,
         not_temporal=data.not_temporal,
         case_marks_names=data.meta.case_marks_names,
@@ -295,3 +306,55 @@ def lexicon(lang: str) -> Lexicon:
                            if rel in POST_RELATIONS or rel in ("range_join", "between_join")
                            for w in words})) if data.meta.particles else (),
     )
+
+
+@functools.cache
+def lexicon(lang: str) -> Lexicon:
+    """Build (once) the lexicon of ``lang`` from CLDR via babel and ``locales/<lang>.toml``,
+    or read it from the generated data when that is current (the same lexicon, sooner)."""
+    stored = stored_index(lang)
+    if stored is None:
+        return fresh_lexicon(lang)
+    table = stored["lexicon"]
+    words = {cls: ({w: tuple(v) for w, v in entries.items()} if cls in _TUPLE_VALUES else entries)
+             for cls, entries in table["words"].items()}
+    return _build(lang, words, frozenset(table["triggers"]))
+
+
+def fresh_lexicon(lang: str) -> Lexicon:
+    """The lexicon of ``lang`` computed from CLDR and the locale file, never from the
+    generated data (not cached: for writing and checking that data)."""
+    words = lexicon_words(lang)
+    return _build(lang, words, _triggers(words))
+
+
+#: Word classes whose values are tuples (JSON keeps them as lists).
+_TUPLE_VALUES = frozenset({"dayperiod_phrase"})
+
+#: The layout of the generated scanner data; a change of layout changes this number, so that
+#: data of another layout is never read.
+INDEX_FORMAT = 1
+
+
+def index_key(lang: str) -> str | None:
+    """What the generated scanner data of ``lang`` is computed from, as one hash: the texts
+    of its locale files, its CLDR extract and the layout of the data (``None`` when one of them
+    is missing, as for a language read from CLDR data alone). The code that computes the data
+    is not in the key: ``tests/locales/test_parsed_extract.py`` checks that the stored data
+    equals what the code computes now."""
+    digest = load_locale(lang).digest
+    cldr_digest = cldr.extract_digest(lang)
+    if digest is None or cldr_digest is None:
+        return None
+    return hashlib.sha256(f"{INDEX_FORMAT} {digest} {cldr_digest}".encode()).hexdigest()
+
+
+def stored_index(lang: str) -> Mapping[str, Any] | None:
+    """The generated scanner data of ``lang`` kept in ``locales/_parsed/`` (its lexicon and
+    how its forms start, see ``scanner.language_index``) if it was computed from exactly the
+    current locale files and CLDR extract, else ``None``."""
+    stored = load_locale(lang).generated
+    if stored is None:
+        return None
+    key = index_key(lang)
+    return stored if key is not None and stored.get("key") == key else None

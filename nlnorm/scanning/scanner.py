@@ -10,17 +10,20 @@ of triggers in a question, not with the number of languages.
 from __future__ import annotations
 
 import functools
+import gc
 import re
 from collections import defaultdict
-from collections.abc import Iterable
+from collections.abc import Callable, Iterable, Iterator
+from collections.abc import Set as AbstractSet
+from contextlib import contextmanager
 from dataclasses import dataclass, field
 from types import MappingProxyType
-from typing import Mapping
+from typing import Any, Mapping, NamedTuple
 
 from .. import cldr
 from ..locale import load_locale
 from ..preparing import fold
-from .forms import _FIXED_PIECE, Form, FormHead, compile_form, form_head, key_of
+from .forms import _FIXED_PIECE, Form, compile_form, form_head, key_of
 from ..locale import POST_RELATIONS
 from .lexicon import TRIGGER_CLASSES
 from .lexicon import (
@@ -28,12 +31,64 @@ from .lexicon import (
     NO_WORD_BEFORE,
     WORD,
     Lexicon,
+    fresh_lexicon,
+    index_key,
     is_word_char,
     lexicon,
+    stored_index,
     trie_regex,
 )
 
-__all__ = ["Scanner", "scanner_for", "cldr_forms"]
+__all__ = ["Scanner", "scanner_for", "cldr_forms", "language_index", "LazyPattern"]
+
+
+class LazyPattern:
+    """A regular expression written and compiled when first used.
+
+    It answers ``match``, ``search``, ``fullmatch``, ``finditer`` and ``findall`` (and any other
+    attribute of a compiled pattern) as the compiled expression would; after the first use those
+    calls go straight to the compiled expression. Most runs need few of the scanner's large
+    expressions, and compiling all of them was a large part of start-up.
+    """
+
+    def __init__(self, build: Callable[[], str]) -> None:
+        self._build = build
+        self._rx: re.Pattern[str] | None = None
+
+    def compiled(self) -> re.Pattern[str]:
+        rx = self._rx
+        if rx is None:
+            rx = re.compile(self._build())
+            self._rx = rx
+            self.match = rx.match  # type: ignore[method-assign]
+            self.search = rx.search  # type: ignore[method-assign]
+            self.fullmatch = rx.fullmatch  # type: ignore[method-assign]
+            self.finditer = rx.finditer  # type: ignore[method-assign]
+            self.findall = rx.findall  # type: ignore[method-assign]
+        return rx
+
+    def match(self, *args: Any) -> re.Match[str] | None:
+        return self.compiled().match(*args)
+
+    def search(self, *args: Any) -> re.Match[str] | None:
+        return self.compiled().search(*args)
+
+    def fullmatch(self, *args: Any) -> re.Match[str] | None:
+        return self.compiled().fullmatch(*args)
+
+    def finditer(self, *args: Any) -> Any:
+        return self.compiled().finditer(*args)
+
+    def findall(self, *args: Any) -> list[Any]:
+        return self.compiled().findall(*args)
+
+    def __getattr__(self, name: str) -> Any:  # pattern, groupindex, groups, flags...
+        if name.startswith("_"):
+            raise AttributeError(name)
+        return getattr(self.compiled(), name)
+
+    def __repr__(self) -> str:
+        return f"LazyPattern({'compiled' if self._rx is not None else 'not compiled yet'})"
 
 
 #: Relations whose words a language with particles may glue to the phrase before them:
@@ -169,9 +224,9 @@ class Scanner:
         return out
 
 
-@dataclass(frozen=True, slots=True)
-class Pending:
-    """A CLDR-generated form not compiled yet (most are never needed in one run)."""
+class Pending(NamedTuple):
+    """A form not compiled yet (most are never needed in one run). A named tuple: thousands
+    are made at start-up, and a tuple is made several times faster than a frozen dataclass."""
 
     lang: str
     source: str
@@ -192,6 +247,46 @@ class Pending:
         return found
 
 
+class GluedWords(AbstractSet[str]):
+    """The words made of one of ``words`` and one of ``endings`` ("hafta" + "ki"), as a
+    read-only set answered without listing them: there are tens of thousands, and a lookup
+    tries each length of ending once."""
+
+    __slots__ = ("words", "endings", "_lengths", "_all")
+
+    def __init__(self, words: frozenset[str], endings: frozenset[str]) -> None:
+        self.words = words
+        self.endings = endings
+        self._lengths = tuple(sorted({len(e) for e in endings}))
+        self._all: frozenset[str] | None = None
+
+    def __contains__(self, text: object) -> bool:
+        if not isinstance(text, str) or not self.words:
+            return False
+        size = len(text)
+        for length in self._lengths:
+            if length > size:
+                break
+            cut = size - length
+            if text[cut:] in self.endings and text[:cut] in self.words:
+                return True
+        return False
+
+    def _listed(self) -> frozenset[str]:
+        if self._all is None:
+            self._all = frozenset(w + e for w in self.words for e in self.endings)
+        return self._all
+
+    def __iter__(self) -> Iterator[str]:
+        return iter(self._listed())
+
+    def __len__(self) -> int:
+        return len(self._listed())
+
+    def __repr__(self) -> str:
+        return f"GluedWords({len(self.words)} words, {len(self.endings)} endings)"
+
+
 def _gate(words: list[str]) -> re.Pattern[str]:
     """One character class of the first characters of ``words``."""
     return re.compile("[" + "".join(sorted({re.escape(w[0]) for w in words if w})) + "]")
@@ -204,6 +299,8 @@ _MANY_KEYS = 64
 def _core(word: str) -> str:
     """The longest run of word characters of ``word`` ("qtr." -> "qtr"), as a question's
     words are split."""
+    if word.isalnum():  # one run: every character is a word character
+        return word
     runs = re.findall(f"{WORD}+", word)
     return max(runs, key=len) if runs else ""
 
@@ -374,123 +471,237 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
     before_words = [w for w, langs in relations.items()
                     if any(r - POST_RELATIONS for r in langs.values())]
     post_words = [w for w, langs in relations.items() if any(r & POST_RELATIONS for r in langs.values())]
-    before_alt = _either([w for w in before_words if w not in glued],
-                         [w for w in before_words if w in glued], NO_WORD_BEFORE + r"(?P<c>{})\s+", r"(?P<c2>{})\s*")
-    before = re.compile(rf"(?:{before_alt})$")
-    join_alt = _either([w for w in joins if w not in glued], [w for w in joins if w in glued],
-                       r"\s+(?P<j>{})\s+", r"\s*(?P<j2>{})\s*")
-    join = re.compile(rf"(?:{join_alt}|\s*(?P<dash>-)\s*)")
-    post_alt = _either([w for w in post_words if w not in glued], [w for w in post_words if w in glued],
+
+    # The expressions are written and compiled when first used (most questions need few of
+    # them, and compiling them all was a large part of start-up).
+    def before() -> str:
+        before_alt = _either([w for w in before_words if w not in glued],
+                             [w for w in before_words if w in glued],
+                             NO_WORD_BEFORE + r"(?P<c>{})\s+", r"(?P<c2>{})\s*")
+        return rf"(?:{before_alt})$"
+
+    def join() -> str:
+        join_alt = _either([w for w in joins if w not in glued], [w for w in joins if w in glued],
+                           r"\s+(?P<j>{})\s+", r"\s*(?P<j2>{})\s*")
+        return rf"(?:{join_alt}|\s*(?P<dash>-)\s*)"
+
+    def suffix() -> str:
+        return _either([w for w in post_words if w not in glued], [w for w in post_words if w in glued],
                        r"\s+(?P<s>{})" + NO_WORD_AFTER, r"\s*(?P<s2>{})")
-    suffix = re.compile(post_alt)
-    osfx = f"(?:{trie_regex(sorted(ordinal_suffixes))})?" if ordinal_suffixes else ""
-    # Joins written as words may stand between spaces even where they may also be glued
-    # ("1 ile 15 Mart", "3월과 5월").
-    spaced_join = trie_regex(sorted(w for w in joins if w not in glued or w[:1].isalnum())) or "(?!)"
-    article = trie_regex(sorted(articles)) or "(?!)"
-    day_end = re.compile(
-        rf"(?:\s+(?P<j>{spaced_join})\s+|\s*-\s*)(?:(?:{article})\s+)?(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?![\w/.:-])"
-        rf"(?:,?\s+(?P<y>(?:19|20)\d\d)(?!\w))?"
-        # Without spaces: a glued join and a day that its suffix closes ("3月1日到15日").
-        + (rf"|\s*(?P<j2>{trie_regex(sorted(w for w in joins if w in glued))})\s*"
-           rf"(?P<d2>3[01]|[12]\d|0?[1-9])(?:{trie_regex(sorted(unspaced_suffixes))})"
-           if unspaced_suffixes and any(w in glued for w in joins) else "")
-    )
-    spaced_before = trie_regex(sorted(w for w in before_words if w not in glued)) or "(?!)"
-    day_start = re.compile(
-        rf"(?<!\w)(?:(?P<pre>{spaced_before})\s+)?(?:(?:{article})\s+)?"
-        rf"(?P<d>3[01]|[12]\d|0?[1-9]){osfx}(?:\s+(?P<j>{spaced_join})\s+|\s*-\s*)$"
-    )
+
+    def osfx() -> str:
+        return f"(?:{trie_regex(sorted(ordinal_suffixes))})?" if ordinal_suffixes else ""
+
+    def spaced_join() -> str:
+        # Joins written as words may stand between spaces even where they may also be glued
+        # ("1 ile 15 Mart", "3월과 5월").
+        return trie_regex(sorted(w for w in joins if w not in glued or w[:1].isalnum())) or "(?!)"
+
+    def article() -> str:
+        return trie_regex(sorted(articles)) or "(?!)"
+
+    def day_end() -> str:
+        return (
+            rf"(?:\s+(?P<j>{spaced_join()})\s+|\s*-\s*)(?:(?:{article()})\s+)?(?P<d>3[01]|[12]\d|0?[1-9]){osfx()}(?![\w/.:-])"
+            rf"(?:,?\s+(?P<y>(?:19|20)\d\d)(?!\w))?"
+            # Without spaces: a glued join and a day that its suffix closes ("3月1日到15日").
+            + (rf"|\s*(?P<j2>{trie_regex(sorted(w for w in joins if w in glued))})\s*"
+               rf"(?P<d2>3[01]|[12]\d|0?[1-9])(?:{trie_regex(sorted(unspaced_suffixes))})"
+               if unspaced_suffixes and any(w in glued for w in joins) else "")
+        )
+
+    def day_start() -> str:
+        spaced_before = trie_regex(sorted(w for w in before_words if w not in glued)) or "(?!)"
+        return (
+            rf"(?<!\w)(?:(?P<pre>{spaced_before})\s+)?(?:(?:{article()})\s+)?"
+            rf"(?P<d>3[01]|[12]\d|0?[1-9]){osfx()}(?:\s+(?P<j>{spaced_join()})\s+|\s*-\s*)$"
+        )
+
     freeze = lambda table: MappingProxyType(  # noqa: E731
         {k: MappingProxyType({lg: frozenset(v) for lg, v in d.items()}) for k, d in table.items()}
     )
     last_words = frozenset(w.split()[-1] for w in before_words if w.split() and w not in glued)
     glued_tails = frozenset(w[-1] for w in before_words if w in glued)
-    return Connectives(before, join, suffix, day_end, day_start, freeze(relations), freeze(joins),
-                       last_words, glued_tails, MappingProxyType(join_endings))
+    return Connectives(LazyPattern(before), LazyPattern(join), LazyPattern(suffix),
+                       LazyPattern(day_end), LazyPattern(day_start), freeze(relations),
+                       freeze(joins), last_words, glued_tails, MappingProxyType(join_endings))
+
+
+# --- what scanner_for needs of one language -----------------------------------------------------
+#
+# Per language, as plain data: each curated form with the bucket keys it is filed under, its
+# leading words and the literal words that find it; each CLDR-generated form with its keys, its
+# leading word and its trigger word. Computed here, or read from ``locales/_parsed/`` (written by
+# ``python -m nlnorm.locale`` from ``language_index``) when that was computed from the same files
+# and code (``lexicon.stored_index``).
+
+_Curated = tuple[str, str, list[str], list[str], list[str]]  # reading, source, keys, leaders, literal
+# source, reading, fixed slots, keys (or _NUM_START), leading word, trigger word
+_Generated = tuple[str, str, tuple[tuple[str, object], ...], "list[str] | str", str, str]
+_TRIGGER_CLASS_SET = frozenset(TRIGGER_CLASSES)
+#: The keys of a CLDR phrase that starts with a number: the same for all of a language's.
+_NUM_START = "{num}"
+
+
+def _curated_entry(reading: str, source: str, lex: Lexicon, spaced: bool) -> _Curated:
+    head = form_head(source, lex)
+    if spaced:
+        keys: Iterable[str] = head.first_keys
+        if len(head.first_keys) > _MANY_KEYS:
+            # A form that can start with thousands of words (a number glued to a unit in
+            # Hangul, words with endings) is filed by their first two letters instead.
+            keys = {k if k.startswith("p:") else "p:" + k[:2] for k in keys}
+    else:
+        keys = {"c:" + ch for ch in head.first_chars}
+    # A form with no slot of a trigger class ("das erste Halbjahr") is found by its words.
+    literal = _literal_triggers(source) if not head.slot_classes & _TRIGGER_CLASS_SET else set()
+    return reading, source, sorted(keys), sorted(head.leaders), sorted(literal)
+
+
+def _generated_entry(source: str, reading: str, fixed: tuple[tuple[str, object], ...],
+                     lex: Lexicon) -> _Generated:
+    first = source.split()[0] if source.split() else ""
+    word = ""
+    for ch in first:  # the first word of the phrase ("l" of "l'année", "следв" of "следв.")
+        if not is_word_char(ch):
+            break
+        word += ch
+    leader = word if lex.spaces and word and not word[0].isdigit() else ""
+    # A phrase that starts with a number starts as every such phrase of the language does.
+    keys = _NUM_START if source.strip().startswith("{num}") else sorted(_cheap_first(source, lex))
+    return source, reading, fixed, keys, leader, _cheap_trigger(source, lex.spaces)
+
+
+def _fresh_part(lang: str, lex: Lexicon, root_lex: Lexicon | None
+                ) -> tuple[list[_Curated], list[_Generated], list[_Curated]]:
+    """The curated forms, the CLDR-generated forms and (given the root lexicon) the root
+    forms of ``lang``, computed from its data."""
+    data = load_locale(lang)
+    curated = [_curated_entry(reading, source, lex, lex.spaces)
+               for reading, sources in data.forms.items() for source in sources]
+    generated = [_generated_entry(source, reading, fixed, lex) for source, reading, fixed in cldr_forms(lang)]
+    root = [] if root_lex is None else [_curated_entry(reading, source, root_lex, True)
+                                        for reading, sources in data.root_forms.items()
+                                        for source in sources]
+    return curated, generated, root
+
+
+def _part(lang: str, lex: Lexicon, root_lex: Lexicon | None
+          ) -> tuple[list[_Curated], list[_Generated], list[_Curated]]:
+    stored = stored_index(lang)
+    if stored is None:
+        return _fresh_part(lang, lex, root_lex)
+    table = stored["scanner"]
+    generated = [(source, reading, tuple((name, value) for name, value in fixed), keys, leader, trigger)
+                 for source, reading, fixed, keys, leader, trigger in table["generated"]]
+    return table["curated"], generated, table["root"] if root_lex is not None else []
+
+
+def language_index(lang: str) -> dict[str, Any] | None:
+    """The generated data of ``lang`` kept in ``locales/_parsed/<lang>.json``: its lexicon and
+    what the scanner needs of its forms, computed afresh, as plain JSON (``None`` when it cannot
+    be keyed, see ``lexicon.index_key``)."""
+    key = index_key(lang)
+    if key is None:
+        return None
+    lex = fresh_lexicon(lang)
+    curated, generated, root = _fresh_part(lang, lex, _root_lexicon({lang: lex}))
+    return {
+        "key": key,
+        "lexicon": {"words": {cls: dict(table) for cls, table in lex.words.items()},
+                    "triggers": sorted(lex.triggers)},
+        "scanner": {"curated": [list(e) for e in curated],
+                    "generated": [[s, r, [list(f) for f in fixed], k, ld, t] for s, r, fixed, k, ld, t in generated],
+                    "root": [list(e) for e in root]},
+    }
+
+
+@contextmanager
+def _collector_paused() -> Iterator[None]:
+    """Pause the cyclic garbage collector while the scanner's tables are built: they are tens
+    of thousands of new objects and no garbage, and the collector's passes over them cost
+    about as much as building them. It runs again afterwards as it was."""
+    enabled = gc.isenabled()
+    gc.disable()
+    try:
+        yield
+    finally:
+        if enabled:
+            gc.enable()
 
 
 @functools.lru_cache(maxsize=64)
 def scanner_for(languages: tuple[str, ...]) -> Scanner:
     """The scanner of ``languages`` (built once per tuple and cached)."""
+    with _collector_paused():
+        return _scanner(languages)
+
+
+def _scanner(languages: tuple[str, ...]) -> Scanner:
     lexicons = {lang: lexicon(lang) for lang in languages}
-    mine: list[tuple[Pending, FormHead]] = []  # curated forms from locales/, not compiled yet
+    mine: list[Pending] = []  # curated forms from locales/, not compiled yet
     pending: list[Pending] = []
-    order = 0
-    root_done = False
-    for lang in languages:
-        data = load_locale(lang)
-        lex = lexicons[lang]
-        where = f"locales/{lang}.toml [forms]"
-        for reading, sources in data.forms.items():
-            for source in sources:
-                p = Pending(lang, source, reading, (), order, f"{where} {reading}", lex.spaces)
-                mine.append((p, form_head(source, lex)))
-                order += 1
-        for source, reading, fixed in cldr_forms(lang):
-            pending.append(Pending(lang, source, reading, fixed, order, "", lex.spaces))
-            order += 1
-        if not root_done:
-            root_done = True
-            root_lex = _root_lexicon(lexicons)
-            for reading, sources in data.root_forms.items():
-                for source in sources:
-                    p = Pending("und", source, reading, (), order, "locales/root.toml", True)
-                    mine.append((p, form_head(source, root_lex)))
-                    order += 1
     curated: dict[object, list[Pending]] = defaultdict(list)
     generated: dict[object, list[Pending]] = defaultdict(list)
     leaders_spaced: set[str] = set()
     leaders_unspaced: set[str] = set()
     cldr_triggers: dict[bool, set[str]] = {True: set(), False: set()}
     lang_triggers: dict[str, set[str]] = defaultdict(set)
-    for p in pending:
-        lex = lexicons[p.lang]
-        for key in _cheap_first(p.source, lex):
-            generated[key].append(p)
-        first = p.source.split()[0] if p.source.split() else ""
-        word = ""
-        for ch in first:  # the first word of the phrase ("l" of "l'année", "следв" of "следв.")
-            if not is_word_char(ch):
-                break
-            word += ch
-        if lex.spaces and word and not word[0].isdigit():
-            leaders_spaced.add(word)
-        trigger_word = _cheap_trigger(p.source, lex.spaces)
-        if trigger_word:
-            cldr_triggers[lex.spaces].add(trigger_word)
-            lang_triggers[p.lang].add(trigger_word)
-    for p, head in mine:
-        if p.spaced:
-            keys: Iterable[str] = head.first_keys
-            if len(keys) > _MANY_KEYS:
-                # A form that can start with thousands of words (a number glued to a unit in
-                # Hangul, words with endings) is filed by their first two letters instead.
-                keys = {k if k.startswith("p:") else "p:" + k[:2] for k in keys}
+    # Words of CLDR phrases without slots ("now") trigger too, and so do the words of forms
+    # with no slot of a trigger class ("das erste Halbjahr").
+    extra: set[str] = set()
+    extra_unspaced: set[str] = set()
+    order = 0
+    for i, lang in enumerate(languages):
+        lex = lexicons[lang]
+        spaced = lex.spaces
+        own, cldr_own, root = _part(lang, lex, _root_lexicon(lexicons) if i == 0 else None)
+        where = f"locales/{lang}.toml [forms]"
+        leaders = leaders_spaced if spaced else leaders_unspaced
+        literal_words = extra if spaced else extra_unspaced
+        for reading, source, keys, first_words, literal in own:
+            p = Pending(lang, source, reading, (), order, f"{where} {reading}", spaced)
+            order += 1
+            mine.append(p)
             for key in keys:
                 curated[key].append(p)
-        else:
-            for ch in head.first_chars:
-                curated["c:" + ch].append(p)
-        (leaders_spaced if p.spaced else leaders_unspaced).update(head.leaders)
-    # Words of CLDR phrases without slots ("now") trigger too.
-    extra = {max(p.source.split(), key=len) for p in pending if p.fixed == () and p.reading == "NOW"}
-    # A form with no slot of a trigger class ("das erste Halbjahr") is found by its words.
-    extra_unspaced: set[str] = set()
-    for p, head in mine:
-        if not head.slot_classes & set(TRIGGER_CLASSES):
-            (extra if p.spaced else extra_unspaced).update(_literal_triggers(p.source))
-    spaced = sorted({t for lex in lexicons.values() if lex.spaces for t in lex.triggers} | extra
-                    | cldr_triggers[True])
+            leaders.update(first_words)
+            literal_words.update(literal)
+        triggers = cldr_triggers[spaced]
+        mine_triggers = lang_triggers[lang]
+        num_keys = sorted(_cheap_first(_NUM_START, lex))
+        for source, reading, fixed, keys, leader, trigger in cldr_own:
+            p = Pending(lang, source, reading, fixed, order, "", spaced)
+            order += 1
+            pending.append(p)
+            for key in num_keys if keys == _NUM_START else keys:
+                generated[key].append(p)
+            if leader:
+                leaders_spaced.add(leader)
+            if trigger:
+                triggers.add(trigger)
+                mine_triggers.add(trigger)
+            if not fixed and reading == "NOW":
+                extra.add(max(source.split(), key=len))
+        for reading, source, keys, first_words, literal in root:
+            p = Pending("und", source, reading, (), order, "locales/root.toml", True)
+            order += 1
+            mine.append(p)
+            for key in keys:
+                curated[key].append(p)
+            leaders_spaced.update(first_words)
+            extra.update(literal)
+    spaced_triggers = sorted({t for lex in lexicons.values() if lex.spaces for t in lex.triggers} | extra
+                             | cldr_triggers[True])
     quiet = {w for lang in languages for w in load_locale(lang).quiet}
-    spaced = [t for t in spaced if t not in quiet]
+    spaced_triggers = [t for t in spaced_triggers if t not in quiet]
     unspaced = sorted({t for lex in lexicons.values() if not lex.spaces for t in lex.triggers}
                       | cldr_triggers[False] | extra_unspaced)
     # Spaced languages: words are looked up in sets, one pass over the question's words
     # (digits that start a number trigger too; see scanning._marks). Languages written
     # without spaces: one expression, since their words are not separated.
-    triggers = set(spaced) | set(unspaced)
-    trigger_words = {_core(t) for t in spaced} - {""}
+    triggers_all = set(spaced_triggers) | set(unspaced)
+    trigger_words = {_core(t) for t in spaced_triggers} - {""}
     endings: set[str] = set()
     glued_words: set[str] = set()
     for lang, lex in lexicons.items():
@@ -498,29 +709,33 @@ def scanner_for(languages: tuple[str, ...]) -> Scanner:
             endings |= set(lex.particles) | set(lex.glue)
             trigger_words |= {_core(t) for t in lang_triggers[lang] - quiet}
             glued_words |= {_core(t) for t in set(lex.triggers) | lang_triggers[lang]} - quiet
-    leader_words = {_core(w) for w in leaders_spaced if w not in triggers} - trigger_words - {""}
-    unspaced_leaders = sorted(w for w in leaders_unspaced if w not in triggers)
+    leader_words = {_core(w) for w in leaders_spaced if w not in triggers_all} - trigger_words - {""}
+    unspaced_leaders = sorted(w for w in leaders_unspaced if w not in triggers_all)
     marks = None
     if unspaced or unspaced_leaders:
-        marks = re.compile(_either(unspaced, [], "(?P<t>{})", "")
-                           + ("|(?P<l>" + trie_regex(unspaced_leaders) + ")" if unspaced_leaders else ""))
+        marks = LazyPattern(lambda: _either(unspaced, [], "(?P<t>{})", "")
+                            + ("|(?P<l>" + trie_regex(unspaced_leaders) + ")" if unspaced_leaders else ""))
     return Scanner(
         languages=languages,
         trigger_words=frozenset(trigger_words),
         leader_words=frozenset(leader_words),
         endings=tuple(sorted(endings, key=len, reverse=True)),
-        unspaced_marks=marks,
+        unspaced_marks=marks,  # type: ignore[arg-type]
         unspaced_gate=_gate(unspaced + unspaced_leaders) if marks is not None else None,
-        glued_triggers=frozenset(t + e for t in glued_words for e in endings),
+        glued_triggers=GluedWords(frozenset(glued_words), frozenset(endings)),  # type: ignore[arg-type]
         not_temporal=frozenset(w for lex in lexicons.values() for w in lex.not_temporal),
         curated=MappingProxyType({k: tuple(v) for k, v in curated.items()}),
         generated=MappingProxyType({k: tuple(v) for k, v in generated.items()}),
         lexicons=MappingProxyType(lexicons),
         connectives=_connectives(languages),
-        pending=tuple(p for p, _ in mine) + tuple(pending),
+        pending=tuple(mine) + tuple(pending),
         _cache={},
         _compiled={},
         unspaced=any(not lex.spaces for lex in lexicons.values()),
-        marks=tuple((lang, re.compile(f"[{load_locale(lang).meta.marks}]")) for lang in languages
-                    if load_locale(lang).meta.marks),
+        marks=tuple((lang, LazyPattern(functools.partial(_mark_class, load_locale(lang).meta.marks)))
+                    for lang in languages if load_locale(lang).meta.marks),  # type: ignore[misc]
     )
+
+
+def _mark_class(marks: str) -> str:
+    return f"[{marks}]"
