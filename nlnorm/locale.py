@@ -18,7 +18,6 @@ from __future__ import annotations
 import functools
 import hashlib
 import json
-import tomllib
 from pathlib import Path
 from types import MappingProxyType
 from typing import Any, Literal, Mapping
@@ -274,6 +273,8 @@ def _load(path: Path) -> tuple[LocaleFile, str, Mapping[str, Any] | None]:
     if stored is not None:
         raw = stored["data"]
     else:
+        import tomllib  # only for a file edited since its extract was written
+
         try:
             raw = tomllib.loads(text)
         except tomllib.TOMLDecodeError as exc:
@@ -405,6 +406,8 @@ def write_extract() -> list[Path]:
     hash of its text, and for a language the scanner's data of it (computed afresh, see
     ``scanning.scanner.language_index``). Returns the paths written; extracts of files that are
     gone are removed."""
+    import tomllib
+
     from .scanning.scanner import language_index
 
     base = locales_dir()

@@ -333,7 +333,7 @@ _TUPLE_VALUES = frozenset({"dayperiod_phrase"})
 
 #: The layout of the generated scanner data; a change of layout changes this number, so that
 #: data of another layout is never read.
-INDEX_FORMAT = 1
+INDEX_FORMAT = 2
 
 
 def index_key(lang: str) -> str | None:

@@ -592,9 +592,27 @@ def _part(lang: str, lex: Lexicon, root_lex: Lexicon | None
     if stored is None:
         return _fresh_part(lang, lex, root_lex)
     table = stored["scanner"]
-    generated = [(source, reading, tuple((name, value) for name, value in fixed), keys, leader, trigger)
+    curated = [(reading, source, _words_in(keys), _words_in(leaders), _words_in(literal))
+               for reading, source, keys, leaders, literal in table["curated"]]
+    generated = [(source, reading, tuple(fixed.items()), _NUM_START if keys is None else _words_in(keys),
+                  leader, trigger)
                  for source, reading, fixed, keys, leader, trigger in table["generated"]]
-    return table["curated"], generated, table["root"] if root_lex is not None else []
+    root = [(reading, source, _words_in(keys), _words_in(leaders), _words_in(literal))
+            for reading, source, keys, leaders, literal in table["root"]] if root_lex is not None else []
+    return curated, generated, root
+
+
+# In the stored data a list of words is one string, the words separated by spaces, when no word
+# holds white space (nearly always): a string is read faster than a list, and the collector
+# never has to look into it. Fixed slots are an object; the number keys are null.
+
+def _words_out(words: list[str]) -> str | list[str]:
+    plain = all(w and not any(ch.isspace() for ch in w) for w in words)
+    return " ".join(words) if plain else list(words)
+
+
+def _words_in(words: str | list[str]) -> list[str]:
+    return words.split() if isinstance(words, str) else words
 
 
 def language_index(lang: str) -> dict[str, Any] | None:
@@ -606,13 +624,20 @@ def language_index(lang: str) -> dict[str, Any] | None:
         return None
     lex = fresh_lexicon(lang)
     curated, generated, root = _fresh_part(lang, lex, _root_lexicon({lang: lex}))
+
+    def forms(entries: list[_Curated]) -> list[list[Any]]:
+        return [[r, s, _words_out(k), _words_out(ld), _words_out(t)] for r, s, k, ld, t in entries]
+
+    if any(len(dict(fixed)) != len(fixed) for _, _, fixed, _, _, _ in generated):
+        raise ValueError(f"{lang}: a CLDR form fixes one slot twice")  # kept as an object below
     return {
         "key": key,
         "lexicon": {"words": {cls: dict(table) for cls, table in lex.words.items()},
                     "triggers": sorted(lex.triggers)},
-        "scanner": {"curated": [list(e) for e in curated],
-                    "generated": [[s, r, [list(f) for f in fixed], k, ld, t] for s, r, fixed, k, ld, t in generated],
-                    "root": [list(e) for e in root]},
+        "scanner": {"curated": forms(curated),
+                    "generated": [[s, r, dict(fixed), None if k == _NUM_START else _words_out(k), ld, t]  # type: ignore[arg-type]
+                                  for s, r, fixed, k, ld, t in generated],
+                    "root": forms(root)},
     }
 
 
