@@ -592,9 +592,13 @@ def _part(lang: str, lex: Lexicon, root_lex: Lexicon | None
     if stored is None:
         return _fresh_part(lang, lex, root_lex)
     table = stored["scanner"]
-    curated = [(reading, source, _words_in(keys), _words_in(leaders), _words_in(literal))
+    # (_words_in, written out: this runs for thousands of forms at every start)
+    curated = [(reading, source, keys.split() if keys.__class__ is str else keys,
+                leaders.split() if leaders.__class__ is str else leaders,
+                literal.split() if literal.__class__ is str else literal)
                for reading, source, keys, leaders, literal in table["curated"]]
-    generated = [(source, reading, tuple(fixed.items()), _NUM_START if keys is None else _words_in(keys),
+    generated = [(source, reading, tuple(fixed.items()),
+                  _NUM_START if keys is None else keys.split() if keys.__class__ is str else keys,
                   leader, trigger)
                  for source, reading, fixed, keys, leader, trigger in table["generated"]]
     root = [(reading, source, _words_in(keys), _words_in(leaders), _words_in(literal))
