@@ -22,6 +22,7 @@ from __future__ import annotations
 
 import functools
 import re
+import sys
 from collections.abc import Iterable
 from dataclasses import dataclass
 
@@ -69,11 +70,16 @@ class Form:
     single: str | None  # the slot class when the form is one bare slot
     first_chars: frozenset[str]
     first_keys: frozenset[str]  # first runs of the texts the form can start with
-    pair_keys: frozenset[tuple[str, str]] | None  # first two runs; "" second = anything
+    #: first run -> the second runs that may follow it ("" = anything); ``None`` when too many.
+    #: A mapping of shared strings rather than a set of pairs: a fifth of the memory.
+    pair_keys: Mapping[str, frozenset[str]] | None
     leaders: frozenset[str]  # first words that are not themselves triggers ("the", "in", "last")
     order: int
     spaced: bool
     tokens: int  # specificity: tokens plus the slots and literal pieces inside them
+    #: When ``pair_keys`` is ``None``: first run -> the first two letters of the second runs
+    #: that may follow it (a coarser index that stays small: "3일" and "3주" of Korean).
+    pair_heads: Mapping[str, frozenset[str]] | None = None
 
     @property
     def group(self) -> str:
@@ -144,17 +150,41 @@ def runs_key(text: str, pos: int = 0) -> tuple[str, str]:
     return first, second
 
 
-@functools.lru_cache(maxsize=65536)
+@functools.lru_cache(maxsize=8192)
 def _runs2(sample: str) -> tuple[str, ...]:
     runs = _RUN.findall(sample)[:2]
-    return tuple(f"#{min(len(r), 4)}" if r[0].isdigit() else r for r in runs)
+    return tuple(sys.intern(f"#{min(len(r), 4)}" if r[0].isdigit() else r) for r in runs)
 
 
-def _token_runs(samples: tuple[str, ...]) -> frozenset[tuple[str, ...]]:
+def _pairs_by_first(pairs: set[tuple[str, str]]) -> Mapping[str, frozenset[str]]:
+    table: dict[str, set[str]] = {}
+    for first, second in pairs:
+        table.setdefault(sys.intern(first), set()).add(sys.intern(second))
+    out: dict[str, frozenset[str]] = {}
+    for first, seconds in table.items():
+        key = frozenset(seconds)
+        # Many first runs share their second runs (every number word before the same units):
+        # one set object serves them all.
+        shared = _SHARED_SECONDS.get(key)
+        if shared is None:
+            shared = key
+            if len(_SHARED_SECONDS) < 100_000:
+                _SHARED_SECONDS[key] = key
+        out[first] = shared
+    return out
+
+
+_SHARED_SECONDS: dict[frozenset[str], frozenset[str]] = {}
+
+
+def _token_runs(samples: tuple[str, ...], head: int = 0) -> frozenset[tuple[str, ...]]:
+    if head:
+        return frozenset(r[:1] + tuple(x[:head] for x in r[1:]) for s in samples if (r := _runs2(s)))
     return frozenset(r for s in samples if (r := _runs2(s)))
 
 
-def _sample_keys(token_samples: list[tuple[list[str], bool]]) -> set[tuple[str, str]] | None:
+def _sample_keys(token_samples: list[tuple[list[str], bool]], head_size: int = 0
+                 ) -> set[tuple[str, str]] | None:
     """Every (first run, second run) a form can start with, from sample texts of its tokens
     (tokens are separated by white space, so runs never cross a token boundary); a second run
     of ``""`` means the form may end after one run. ``None`` when there are too many."""
@@ -163,13 +193,13 @@ def _sample_keys(token_samples: list[tuple[list[str], bool]]) -> set[tuple[str, 
     head = 0
     while head < len(token_samples) - 1 and token_samples[head][1]:
         head += 1
-    tokens = [(_token_runs(tuple(samples)), optional) for samples, optional in token_samples]
+    tokens = [(_token_runs(tuple(samples), head_size), optional) for samples, optional in token_samples]
     # Walk from the last token back: firsts = runs a suffix can start with, pairs = its keys.
     firsts: frozenset[str] = frozenset({""})
     pairs: set[tuple[str, str]] = set()
     for index in range(len(tokens) - 1, -1, -1):
         runs, optional = tokens[index]
-        new_firsts: set[str] = {r[0] for r in runs}
+        new_firsts: set[str] = {r[0][:head_size] if head_size else r[0] for r in runs}
         new_pairs: set[tuple[str, str]] = set()
         if index <= head:
             for r in runs:
@@ -476,6 +506,7 @@ def compile_form(
     # A bare word: one token that is one slot ("{month}", not "{year}'te" or "{month} ayı").
     single = slots[0][1] if len(tokens) == 1 and len(slots) == 1 and not fixed and bare else None
     pair_keys = _sample_keys(token_samples) if lex.spaces else None
+    heads = _sample_keys(token_samples, 2) if lex.spaces and pair_keys is None else None
     return Form(
         lang=lex.lang,
         reading=reading,
@@ -487,11 +518,12 @@ def compile_form(
         single=single,
         first_chars=frozenset(first_chars),
         first_keys=frozenset(first_keys),
-        pair_keys=frozenset(pair_keys) if pair_keys is not None else None,
+        pair_keys=_pairs_by_first(pair_keys) if pair_keys is not None else None,
         leaders=frozenset(first_words),
         order=order,
         spaced=lex.spaces,
         tokens=weight,
+        pair_heads=_pairs_by_first(heads) if heads is not None else None,
     )
 
 

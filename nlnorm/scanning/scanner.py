@@ -215,10 +215,15 @@ class Scanner:
             if isinstance(key, tuple):
                 pairs = form.pair_keys
                 if pairs is None:
-                    # Too many pairs to list: the form is tried wherever its first run fits.
-                    if key[1] or key[0] not in form.first_keys:
+                    heads = form.pair_heads
+                    if heads is not None:
+                        # Too many pairs to list: the first letters of the second run decide.
+                        if key[1][:2] not in heads.get(key[0], ()):
+                            continue
+                    # Too many even so: the form is tried wherever its first run fits.
+                    elif key[1] or key[0] not in form.first_keys:
                         continue
-                elif key not in pairs:
+                elif key[1] not in pairs.get(key[0], ()):
                     continue
             out.append(form)
         return out
