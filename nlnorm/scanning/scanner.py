@@ -359,6 +359,16 @@ def _covered(form: Form, curated: Bucket) -> bool:
     return other.lang == form.lang and other.reading == form.reading
 
 
+_DIGIT_SLOT = re.compile(r"\{(?:year|weeknum|qnum|hnum|day|day2|month2|week2|isoday|numdate|digits)\}")
+
+
+def _needs_digits(source: str) -> bool:
+    """Whether every text of the form holds digits: a token that is not optional holds a slot
+    of digits ("{year}", "q{qnum}")."""
+    return any(not token.endswith("?") and _DIGIT_SLOT.search(token)
+               for token in source.lstrip("~").split())
+
+
 def _literal_triggers(source: str) -> set[str]:
     """The words that find a form without trigger slots: its longest word that must be there,
     else every word of its first choice that must be there ("(halbjahr|jahreshälfte)")."""
@@ -559,7 +569,11 @@ def _curated_entry(reading: str, source: str, lex: Lexicon, spaced: bool) -> _Cu
     else:
         keys = {"c:" + ch for ch in head.first_chars}
     # A form with no slot of a trigger class ("das erste Halbjahr") is found by its words.
-    literal = _literal_triggers(source) if not head.slot_classes & _TRIGGER_CLASS_SET else set()
+    # Not needed when a number the form cannot do without finds it (every number is a trigger:
+    # "q{qnum} of {year}"), nor for the forms of non-time phrases (N), which only matter
+    # around a time word that is a trigger itself: their first words lead to it.
+    literal = _literal_triggers(source) if not head.slot_classes & _TRIGGER_CLASS_SET and not (
+        spaced and (reading == "N" or _needs_digits(source))) else set()
     return reading, source, sorted(keys), sorted(head.leaders), sorted(literal)
 
 
