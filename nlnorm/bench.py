@@ -89,7 +89,12 @@ for q in (generate(n, seed=0) if what == "en" else generate_mixed(n, seed=0)):
 if what == "every":
     from nlnorm.bench import load_every_locale
     load_every_locale()
-print(resource.getrusage(resource.RUSAGE_SELF).ru_maxrss / 1024)
+# VmHWM: the peak of this process alone (ru_maxrss keeps the parent's peak across exec).
+try:
+    with open("/proc/self/status") as status:
+        print(next(int(line.split()[1]) for line in status if line.startswith("VmHWM")) / 1024)
+except OSError:
+    print(resource.getrusage(resource.RUSAGE_SELF).ru_maxrss / 1024)
 """
 
 

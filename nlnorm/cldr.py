@@ -120,9 +120,17 @@ def _language(lang: str) -> dict[str, Any]:
     return _cached_language(lang) or _extract_language_cached(lang)
 
 
-@functools.lru_cache(maxsize=256)
+@functools.lru_cache(maxsize=32)
 def _extract_language_cached(lang: str) -> dict[str, Any]:
-    return extract_language(lang)
+    data = extract_language(lang)
+    # babel keeps every locale's whole data once loaded (~300 KB each); what nlnorm needs is
+    # now in ``data``, so let babel's caches go (with every locale of the CLDR tier loaded,
+    # 430 MB -> the few MB of the extracts).
+    from babel import localedata
+
+    _locale.cache_clear()
+    localedata.clear_caches()
+    return data
 
 
 def _locale_row(locale: str) -> list[Any]:
