@@ -281,40 +281,43 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
     found: list[Candidate] = []
     limit = 0
     pair = _PAIR.match
-    cache = scanner._cache
-    get = scanner.buckets
     unspaced = scanner.unspaced
+    starts = scanner._cache.get("starts")
+    if starts is None:
+        starts = scanner._cache["starts"] = {}  # type: ignore[assignment]
     for pos in sorted(positions):
         if pos < limit:
             continue
-        keys: list[object] = []
-        if not pos or not is_word_char(text[pos - 1]):
+        at_word = not pos or not _continues(text[pos - 1])
+        ch = text[pos]
+        with_chars = unspaced and not (ch.isdigit() and _LATIN_AFTER_NUMBER.match(text, pos))
+        first = second = ""
+        if at_word:
             m0 = pair(text, pos)
             if m0 is not None:
                 first, second = m0.group(1), m0.group(2) or ""
                 if first[0].isdigit():
-                    first = f"#{min(len(first), 4)}"
+                    first = _DIGIT_KEYS[min(len(first), 4)]
                 if second and second[0].isdigit():
-                    second = f"#{min(len(second), 4)}"
-                keys.append((first, second))
-                if second:
-                    keys.append((first, ""))
-        if unspaced and not (text[pos].isdigit() and _LATIN_AFTER_NUMBER.match(text, pos)):
-            # A number followed by a Latin word or the end ("10 issues") starts no phrase of
-            # a language written without spaces: their numbers are followed by their own
-            # script, a separator or a time ("3天", "2025年", "10:00").
-            keys.append("c:" + text[pos])
+                    second = _DIGIT_KEYS[min(len(second), 4)]
+        # The buckets tried at a place depend only on its first two runs and where it stands:
+        # looked up once per such start, not key by key.
+        start_key = (first, second, at_word, with_chars and ch)
+        tried = starts.get(start_key)
+        if tried is None:
+            tried = _buckets_at(scanner, first, second, at_word, ch if with_chars else "")
+            if len(starts) < _STARTS_SIZE:
+                starts[start_key] = tried
+        if not tried:
+            continue
         best = None
         best_end = -1
-        for k in keys:
-            buckets = cache.get(k)
-            if buckets is None:
-                buckets = get(k)
+        for by_char, buckets in tried:
             for bucket in buckets:
                 m = bucket.regex.match(text, pos)
                 if m is None:
                     continue
-                if isinstance(k, str) and len(bucket.forms) > 1:
+                if by_char and len(bucket.forms) > 1:
                     m = _longest(bucket, text, pos, m, prefer)
                 end = m.end()
                 if end > best_end:
@@ -334,6 +337,24 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
     if not found:
         return ()
     return combine(prepared, found, scanner)
+
+
+_STARTS_SIZE = 100_000
+_DIGIT_KEYS = ("", "#1", "#2", "#3", "#4")
+
+
+def _buckets_at(scanner: Scanner, first: str, second: str, at_word: bool, ch: str
+                ) -> tuple[tuple[bool, tuple[object, ...]], ...]:
+    """The buckets to try at a place: by its first two runs (at a word start) and by its first
+    character (languages without spaces), each marked whether it is a by-character one."""
+    out: list[tuple[bool, tuple[object, ...]]] = []
+    if at_word and first:
+        out.append((False, scanner.buckets((first, second))))
+        if second:
+            out.append((False, scanner.buckets((first, ""))))
+    if ch:
+        out.append((True, scanner.buckets("c:" + ch)))
+    return tuple((by_char, b) for by_char, b in out if b)
 
 
 def _longest(bucket, text: str, pos: int, m, prefer=None):  # type: ignore[no-untyped-def]
