@@ -48,14 +48,16 @@ def scan(prepared: Prepared, ctx: "Context") -> tuple[Candidate, ...]:
 def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     """:func:`scan` with an explicit scanner (no context needed): exact phrases, then the
     phrases a one-letter typo hid (lower confidence, see :mod:`nlnorm.scanning.typos`)."""
-    exact = _scan_exact(prepared, scanner)
-    fuzzy = typo_candidates(prepared, scanner, exact, _scan_exact)
+    words = _TOKEN.findall(prepared.text)
+    present = set(words)
+    exact = _scan_exact(prepared, scanner, None, present)
+    fuzzy = typo_candidates(prepared, scanner, exact, _scan_exact, present)
     if not fuzzy:
         return exact
     return tuple(sorted(exact + fuzzy, key=lambda c: c.span.start))
 
 
-def _marks(text: str, scanner: Scanner, words: list[str] | None = None) -> tuple[list[int], list[int]]:
+def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tuple[list[int], list[int]]:
     """Positions of trigger words and of leading words, in one pass over the words of
     ``text`` (set lookups: no expression over every word of every language to compile), plus
     the expression of the languages written without spaces.
@@ -64,10 +66,9 @@ def _marks(text: str, scanner: Scanner, words: list[str] | None = None) -> tuple
     question whose words are all known non-triggers leaves after a few set operations."""
     hits: list[int] = []
     leaders: list[int] = []
-    if words is None:
-        words = _TOKEN.findall(text)
+    if present is None:
+        present = set(_TOKEN.findall(text))
     kinds, hot, lead, letter_gate = _state(scanner)
-    present = set(words)
     new = present.difference(kinds)
     extra: dict[str, int] = {}  # words met when the memory is full: looked at every time
     if new:
@@ -237,11 +238,12 @@ def _elided_start(text: str, k: int) -> int | None:
 
 
 def _scan_exact(prepared: Prepared, scanner: Scanner,
-                near: tuple[tuple[int, int], ...] | None = None) -> tuple[Candidate, ...]:
+                near: tuple[tuple[int, int], ...] | None = None,
+                present: set[str] | None = None) -> tuple[Candidate, ...]:
     """The exact phrases of a prepared text; with ``near``, only phrases that may cover one of
     those spans (used after correcting typos: a phrase must hold a corrected word)."""
     text = prepared.text
-    hits, leaders = _marks(text, scanner)
+    hits, leaders = _marks(text, scanner, present)
     if near is not None:
         back = scanner.lookback
         hits = [h for h in hits if any(s - back <= h < e + back for s, e in near)]

@@ -43,6 +43,8 @@ class TypoIndex:
     tails: frozenset[str]  # last three letters
     memo: dict[str, object] = field(default_factory=dict)  # word -> its correction (or None)
     fixable: set[str] = field(default_factory=set)  # the words of memo that have a correction
+    clean_memo: dict[str, bool] = field(default_factory=dict)  # question word -> holds a typo
+    suspect: set[str] = field(default_factory=set)  # the question words that do
 
 
 def _deletions(word: str) -> set[str]:
@@ -147,6 +149,20 @@ def corrections(text: str, index: TypoIndex, taken: list[Span]) -> list[tuple[in
     return out
 
 
+def _clean(words: set[str], index: TypoIndex) -> bool:
+    """Whether none of ``words`` (whole words of a question) holds a misspelt time word."""
+    memo = index.clean_memo
+    for word in words.difference(memo):
+        bad = any(_correction(run, index) is not None for run in _WORD.findall(word))
+        if len(memo) < _MEMO_SIZE:
+            memo[word] = bad
+            if bad:
+                index.suspect.add(word)
+        elif bad:
+            return False
+    return index.suspect.isdisjoint(words)
+
+
 _UNSEEN = object()
 _MEMO_SIZE = 200_000  # words remembered per scanner (a question log repeats its vocabulary)
 
@@ -223,14 +239,19 @@ def mapped(c: Candidate, back: list[int], note: str) -> Candidate:
 
 
 def typo_candidates(prepared: Prepared, scanner: "Scanner", exact: tuple[Candidate, ...],
-                    scan_exact) -> tuple[Candidate, ...]:  # type: ignore[no-untyped-def]
-    """Phrases found only after correcting misspelt time words."""
+                    scan_exact, words: set[str] | None = None
+                    ) -> tuple[Candidate, ...]:  # type: ignore[no-untyped-def]
+    """Phrases found only after correcting misspelt time words. ``words``, the question's
+    words as the scanner splits them, lets a question whose words are all known to hold no
+    misspelling leave at once."""
     cache = scanner._cache
     if "typos" not in cache:  # built on first use, kept with the scanner
         cache["typos"] = typo_index(  # type: ignore[assignment]
             scanner.languages, tuple(scanner.lexicons[lang] for lang in scanner.languages))
     index: TypoIndex | None = cache["typos"]  # type: ignore[assignment]
     if index is None:
+        return ()
+    if words is not None and _clean(words, index):
         return ()
     fixes = corrections(prepared.text, index, [c.span for c in exact])
     if not fixes:
