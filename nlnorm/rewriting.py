@@ -79,9 +79,24 @@ def _typo_note(r: Resolved) -> str:
     return f"typo: {typo}; " if typo else ""
 
 
-@functools.lru_cache(maxsize=256)
 def reference(ctx: "Context") -> Reference:
-    """The context as the output reports it (cached: contexts are frozen)."""
+    """The context as the output reports it (cached: contexts are frozen). Looked up by the
+    context object itself first: hashing a pydantic model costs more than building this."""
+    global _last_reference
+    last = _last_reference  # one tuple, read at once: safe when threads share the module
+    if last is not None and last[0] is ctx:
+        return last[1]
+    ref = _reference(ctx)
+    _last_reference = (ctx, ref)
+    return ref
+
+
+#: (context, its reference): a batch uses one context throughout.
+_last_reference: "tuple[Context, Reference] | None" = None
+
+
+@functools.lru_cache(maxsize=256)
+def _reference(ctx: "Context") -> Reference:
     return Reference(now=iso(ctx.now), tz=ctx.tz, week_start=str(ctx.week_start),
                      locale=ctx.locale, languages=ctx.languages)
 

@@ -184,6 +184,9 @@ class Lexicon:
         table = self.words.get(cls)
         if table is None:
             return text
+        found = table.get(text)  # matched text is already folded: mostly found as it is
+        if found is not None:
+            return found
         key = collapse(text)
         if key in table:
             return table[key]
