@@ -251,7 +251,7 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
         return ()
     # A language with marks (kana: Japanese) wins ties when the question holds one, and loses
     # them when it holds none.
-    prefer = {lang: 1 if rx.search(text) else -1 for lang, rx in scanner.marks}
+    prefer: dict[str, int] | None = None  # worked out on the first tie that needs it
     # Forms start at a trigger, at the start of the word holding it ("q3"), or at a leading
     # word shortly before it ("in the last 3 weeks").
     positions = set(hits)
@@ -320,12 +320,16 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
                 if m is None:
                     continue
                 if by_char and len(bucket.forms) > 1:
+                    if prefer is None:
+                        prefer = _preferences(scanner, text)
                     m = _longest(bucket, text, pos, m, prefer)
                 end = m.end()
                 if end > best_end:
                     best, best_end = (m, bucket.forms[m.lastgroup]), end  # type: ignore[index]
                 elif end == best_end and best is not None:
                     form = bucket.forms[m.lastgroup]  # type: ignore[index]
+                    if prefer is None:
+                        prefer = _preferences(scanner, text)
                     if (prefer.get(form.lang, 0), form.tokens, -form.order) > \
                             (prefer.get(best[1].lang, 0), best[1].tokens, -best[1].order):
                         best = (m, form)
@@ -357,6 +361,12 @@ def _buckets_at(scanner: Scanner, first: str, second: str, at_word: bool, ch: st
     if ch:
         out.append((True, scanner.buckets("c:" + ch)))
     return tuple((by_char, b) for by_char, b in out if b)
+
+
+def _preferences(scanner: Scanner, text: str) -> dict[str, int]:
+    """A language with marks (kana: Japanese) wins ties when the question holds one, and
+    loses them when it holds none."""
+    return {lang: 1 if rx.search(text) else -1 for lang, rx in scanner.marks}
 
 
 def _longest(bucket, text: str, pos: int, m, prefer=None):  # type: ignore[no-untyped-def]

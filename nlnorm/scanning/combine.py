@@ -244,7 +244,8 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
         if "due_post" in post_rel:
             a = _deadline(a)  # a deadline word after the day, as verb-final order puts it
         bound = next((_POST_BOUND[r] for r in ("since_post", "after_post", "before_post",
-                                                 "until_post", "since_suffix") if r in post_rel), None)
+                                                 "until_post", "since_suffix") if r in post_rel),
+                     None) if post_rel else None
         if bound is not None and post is not None:
             start = pre_start if pre_rel & {"from", "since", "within", "after", "before", "until"} \
                 and _BOUND.get(next((r for r in ("since", "after", "before", "until") if r in pre_rel), ""), "") \
