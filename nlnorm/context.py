@@ -7,7 +7,7 @@ or with keyword arguments. Nothing here reads the system clock: ``now`` is alway
 from __future__ import annotations
 
 import functools
-from datetime import datetime, timezone, tzinfo
+from datetime import date, datetime, timezone, tzinfo
 from typing import Any, Literal
 from zoneinfo import ZoneInfo, ZoneInfoNotFoundError
 
@@ -110,6 +110,20 @@ class Context(BaseModel):
             before today (R14) or Monday of last week (R16); default from the language's data.
         date_order: ``MDY`` | ``DMY`` | ``YMD`` for numeric dates; default from the locale's CLDR
             short date format.
+        sprints: the team's sprint calendar (:class:`~nlnorm.calendars.sprints.SprintCalendar`,
+            or rows / a path to a CSV or JSON file, read with inclusive ends).
+        team: the team whose sprints "this sprint" means (a table with several teams gives one
+            reading per team otherwise).
+        fiscal: the fiscal calendar (:class:`~nlnorm.calendars.fiscal.FiscalYear` or
+            :class:`~nlnorm.calendars.fiscal.RetailYear`); ``fiscal_start="04"`` (``MM`` or
+            ``MM-DD``) and ``fiscal_name="start"|"end"`` build a FiscalYear.
+        quarters: ``calendar`` (default) or ``fiscal``: whether a plain "Q3" or "this quarter"
+            means a fiscal quarter.
+        sprint_window: ``completed`` (default) or ``with_current``: whether "the last 3 sprints"
+            are the three before the current one or the current one and the two before it.
+        holidays: public holidays for business days, ``"US"``, ``"DE-BY"`` (the ``holidays``
+            package); the weekend always comes from CLDR for the locale's territory.
+        closures: extra closed days (dates) for business days.
 
     >>> ctx = Context.at("2026-11-27T10:00", tz="Europe/Berlin")
     >>> ctx.now.isoformat(), ctx.week_start
@@ -127,6 +141,13 @@ class Context(BaseModel):
     window_reading: Literal["rolling", "calendar"] = "rolling"
     weekday_reading: Literal["nearest", "week"] | None = None
     date_order: Literal["MDY", "DMY", "YMD"] | None = None
+    sprints: Any = None  # SprintCalendar | None (validated below)
+    team: str | None = None
+    fiscal: Any = None  # FiscalYear | RetailYear | None (validated below)
+    quarters: Literal["calendar", "fiscal"] = "calendar"
+    sprint_window: Literal["completed", "with_current"] = "completed"
+    holidays: str | None = None
+    closures: tuple[date, ...] = ()
 
     @classmethod
     def at(cls, now: datetime | str, **kwargs: Any) -> "Context":
@@ -222,6 +243,94 @@ class Context(BaseModel):
                 out.append(found)
         return tuple(out)
 
+    @model_validator(mode="before")
+    @classmethod
+    def _v_fiscal_start(cls, data: Any) -> Any:
+        if isinstance(data, dict) and ("fiscal_start" in data or "fiscal_name" in data):
+            from .calendars.fiscal import FiscalYear, parse_fiscal_start
+
+            data = dict(data)
+            start = data.pop("fiscal_start", None)
+            naming = data.pop("fiscal_name", None) or "end"
+            if start is None:
+                if data.get("fiscal") is None:
+                    raise ContextError("fiscal_name was given without fiscal_start (e.g. '04')")
+                fiscal = data["fiscal"]
+                if hasattr(fiscal, "naming") and naming != fiscal.naming:
+                    import dataclasses
+
+                    data["fiscal"] = dataclasses.replace(fiscal, naming=naming)
+            else:
+                month, day = parse_fiscal_start(start)
+                data["fiscal"] = FiscalYear(month, day, naming)
+        return data
+
+    @field_validator("sprints", mode="before")
+    @classmethod
+    def _v_sprints(cls, value: Any) -> Any:
+        from .calendars.sprints import SprintCalendar
+
+        if value is None or isinstance(value, SprintCalendar):
+            return value
+        if isinstance(value, (str,)) or hasattr(value, "__fspath__"):
+            return SprintCalendar.load(value)
+        if isinstance(value, (list, tuple)):
+            return SprintCalendar.from_rows(value)
+        raise ContextError(f"sprints must be a SprintCalendar, a list of rows or a path, "
+                           f"got {type(value).__name__}")
+
+    @field_validator("fiscal", mode="before")
+    @classmethod
+    def _v_fiscal(cls, value: Any) -> Any:
+        from .calendars.fiscal import FiscalYear, RetailYear, parse_fiscal_start
+
+        if value is None or isinstance(value, (FiscalYear, RetailYear)):
+            return value
+        if isinstance(value, (str, int)):
+            month, day = parse_fiscal_start(str(value))
+            return FiscalYear(month, day)
+        raise ContextError(f"fiscal must be a FiscalYear or RetailYear (or 'MM'/'MM-DD'), "
+                           f"got {type(value).__name__}")
+
+    @field_validator("holidays", mode="before")
+    @classmethod
+    def _v_holidays(cls, value: Any) -> Any:
+        if value is None or value == "":
+            return None
+        from .calendars.business import parse_holidays
+
+        country, sub = parse_holidays(value)
+        return country + (f"-{sub}" if sub else "")
+
+    @field_validator("closures", mode="before")
+    @classmethod
+    def _v_closures(cls, value: Any) -> Any:
+        from .calendars.business import _as_date
+
+        if value is None:
+            return ()
+        if isinstance(value, (str, date)):
+            value = [value]
+        return tuple(sorted({_as_date(v, "closures") for v in value}))
+
+    @model_validator(mode="after")
+    def _v_team(self) -> "Context":
+        if self.team is not None:
+            team = self.team.strip()
+            if not team:
+                object.__setattr__(self, "team", None)
+            elif self.sprints is not None and not self.sprints.has_team(team):
+                known = ", ".join(repr(t) for t in self.sprints.teams if t) or "none"
+                raise ContextError(f"team={team!r} has no sprint in the sprint table "
+                                   f"(teams: {known}){suggest(team, [t for t in self.sprints.teams if t])}")
+        return self
+
+    @property
+    def business(self) -> Any:
+        """The business-day calendar: CLDR weekend of the locale's territory, ``holidays``,
+        ``closures``."""
+        return _business(self.locale, self.holidays, self.closures)
+
     @model_validator(mode="after")
     def _v_zone(self) -> "Context":
         now = self.now
@@ -283,11 +392,19 @@ class Context(BaseModel):
         A new ``tz`` without a new ``now`` keeps the instant. A week start that was derived from
         the locale is derived again from a new ``locale``; one that was given is kept.
         """
-        data = self.model_dump()
+        # The fields as they are (model_dump would turn calendars into dicts).
+        data = {name: getattr(self, name) for name in type(self).model_fields}
         if "week_start" not in self.model_fields_set:
             del data["week_start"]
         data.update(changes)
         return Context.model_validate(data)
+
+
+@functools.lru_cache(maxsize=64)
+def _business(locale: str, holidays: str | None, closures: tuple[date, ...]) -> Any:
+    from .calendars.business import BusinessCalendar
+
+    return BusinessCalendar.for_locale(locale, holidays=holidays, closures=closures)
 
 
 def _deep() -> tuple[str, ...]:

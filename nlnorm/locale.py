@@ -124,7 +124,8 @@ class LocaleFile(_Strict):
     ordinals: dict[str, int] = Field(default_factory=dict)
     ordinal_suffixes: Suffixes = Suffixes()
     units: dict[
-        Literal["second", "minute", "hour", "day", "week", "month", "quarter", "year"],
+        Literal["second", "minute", "hour", "day", "week", "month", "quarter", "year",
+                "sprint", "business_day", "fiscal_quarter", "fiscal_year"],
         tuple[str, ...],
     ] = Field(default_factory=dict)
     direction: dict[Literal["last", "this", "next"], tuple[str, ...]] = Field(default_factory=dict)

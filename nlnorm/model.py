@@ -28,6 +28,8 @@ __all__ = [
     "WeekendRef",
     "Now",
     "Duration",
+    "SprintRef",
+    "FiscalRef",
     "Bounded",
     "Between",
     "Interval",
@@ -49,6 +51,9 @@ class Grain(str, enum.Enum):
     HALF = "half"
     YEAR = "year"
     SPRINT = "sprint"
+    BUSINESS_DAY = "business_day"
+    FISCAL_QUARTER = "fiscal_quarter"
+    FISCAL_YEAR = "fiscal_year"
 
     def __str__(self) -> str:
         return self.value
@@ -258,6 +263,25 @@ class Duration(Meaning):
     n: int
 
 
+class SprintRef(Meaning):
+    """R24: a sprint named or numbered in the text ("sprint 42", "the Foxglove sprint"),
+    looked up in the context's sprint table."""
+
+    number: int | None = None
+    name: str | None = None  # the text that named it
+    last: int | None = None  # "sprints 40 to 42": the number of the last one
+
+
+class FiscalRef(Meaning):
+    """R25 / R26: a fiscal year ("FY27") or a quarter of one ("Q1 FY27", "fiscal Q3"); a
+    missing year is the current fiscal year's."""
+
+    year: int | None = None
+    quarter: int | None = None
+    two_digit: bool = False  # the year was written with two digits ("FY27")
+    from_plain_quarter: bool = False  # a plain "Q3" read as fiscal because quarters are fiscal
+
+
 class Bounded(Meaning):
     """R7-R10: ``since`` / ``after`` / ``before`` / ``until`` another meaning."""
 
@@ -293,6 +317,7 @@ class Reading:
     reading: str
     note: str
     policy: str | None = None
+    sprints: tuple[str, ...] = ()  # the sprints a sprint reading covers, by name
 
 
 @dataclass(frozen=True, slots=True)

@@ -18,6 +18,7 @@ from .model import (
     DateRef,
     DayPeriodRef,
     Duration,
+    FiscalRef,
     Grain,
     Meaning,
     Now,
@@ -25,6 +26,7 @@ from .model import (
     RelativeDay,
     Rolling,
     ShiftPeriod,
+    SprintRef,
     ToDate,
     WeekdayCount,
     WeekdayRef,
@@ -59,8 +61,11 @@ def parse(candidates: tuple[Candidate, ...], ctx: "Context") -> tuple[Parsed, ..
     return tuple(Parsed(c, parse_candidate(c, ctx)) for c in candidates)
 
 
-def _grain(value: object) -> Grain:
-    return Grain(str(value))
+def _grain(value: object, ctx: "Context | None" = None) -> Grain:
+    grain = Grain(str(value))
+    if grain is Grain.QUARTER and ctx is not None and ctx.quarters == "fiscal":
+        return Grain.FISCAL_QUARTER  # "this quarter", "last 2 quarters": fiscal ones here
+    return grain
 
 
 def _date_grain(year: object, half: object, quarter: object, month: object, week: object,
@@ -137,17 +142,17 @@ def parse_candidate(c: Candidate, ctx: "Context") -> Meaning | None:
     if r == "R1":
         return RelativeDay(int(slot("relday")))  # type: ignore[arg-type]
     if r == "R2":
-        return ShiftPeriod(_grain(slot("unit")), int(slot("dir")))  # type: ignore[arg-type]
+        return ShiftPeriod(_grain(slot("unit"), ctx), int(slot("dir")))  # type: ignore[arg-type]
     if r in ("R3", "R4"):
         n = int(slot("num", 1))  # type: ignore[arg-type]
         sign = -1 if r == "R3" else 1
         weekday = slot("count_weekday")
         if weekday is not None:
             return WeekdayCount(int(weekday), sign * n)  # type: ignore[arg-type]
-        return Offset(_grain(slot("unit")), sign * n)
+        return Offset(_grain(slot("unit"), ctx), sign * n)
     if r in ("R5", "R6"):
         num = slot("num")
-        return Rolling(_grain(slot("unit")), int(num) if num is not None else 1,  # type: ignore[arg-type]
+        return Rolling(_grain(slot("unit"), ctx), int(num) if num is not None else 1,  # type: ignore[arg-type]
                        -1 if r == "R5" else 1, num is not None)
     if r == "R21":
         grain = slot("to_date") or slot("unit")
@@ -173,7 +178,34 @@ def parse_candidate(c: Candidate, ctx: "Context") -> Meaning | None:
                           nearest=bool(slot("nearest", False)))
     if r == "D":
         return Duration(_grain(slot("unit")), int(slot("num", 1)))  # type: ignore[arg-type]
-    return _parse_date(c, ctx)
+    if r == "R24":
+        number = slot("num")
+        name = slot("sprint_name")
+        last = slot("digits")
+        return SprintRef(int(number) if number is not None else None,  # type: ignore[arg-type]
+                         str(name) if name is not None else None,
+                         int(last) if last is not None else None)  # type: ignore[arg-type]
+    if r in ("R25", "R26"):
+        return _parse_fiscal(c)
+    meaning = _parse_date(c, ctx)
+    if ctx.quarters == "fiscal" and isinstance(meaning, DateRef) and meaning.grain is Grain.QUARTER:
+        # Quarters are fiscal in this context: "Q3" is the third fiscal quarter.
+        return FiscalRef(meaning.year, meaning.quarter, from_plain_quarter=True)
+    return meaning
+
+
+def _parse_fiscal(c: Candidate) -> Meaning | None:
+    year = c.slot("year")
+    two = c.slot("yy")
+    quarter = c.slot("qnum", c.slot("ordinal"))
+    if quarter == -1 and year is None and two is None:
+        return ShiftPeriod(Grain.FISCAL_QUARTER, -1)  # "the last fiscal quarter": the previous one
+    if quarter is not None and not 1 <= int(quarter) <= 4:  # type: ignore[arg-type]
+        return None
+    if two is not None:
+        return FiscalRef(2000 + int(two), int(quarter) if quarter is not None else None, True)  # type: ignore[arg-type]
+    return FiscalRef(int(year) if year is not None else None,  # type: ignore[arg-type]
+                     int(quarter) if quarter is not None else None)
 
 
 def _parse_date(c: Candidate, ctx: "Context") -> DateRef | None:

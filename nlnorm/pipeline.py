@@ -17,7 +17,8 @@ from typing import Any
 from .context import Context, _parse_now
 from .errors import ContextError, InputError, NlnormError
 from .parsing import parse
-from .preparing import prepare
+from .model import Candidate
+from .preparing import Prepared, prepare
 from .resolution import resolve
 from .rewriting import annotate
 from .scanning import scan
@@ -44,8 +45,28 @@ def normalize(text: str, ctx: Context, id: object = None) -> Result:
     """
     prepared = prepare(text)
     candidates = scan(prepared, ctx)
+    if ctx.sprints is not None:
+        candidates = _with_sprint_names(prepared, candidates, ctx)
     resolved = resolve(parse(candidates, ctx), ctx) if candidates else ()
     return annotate(prepared, resolved, ctx, id=id)
+
+
+def _with_sprint_names(prepared: Prepared, candidates: tuple[Candidate, ...], ctx: Context
+                       ) -> tuple[Candidate, ...]:
+    """Add the sprints the question names (from the context's sprint table); a phrase the
+    scanner found wins over a named sprint it overlaps unless the name's phrase is longer."""
+    from .scanning import scanner_for
+    from .scanning.names import sprint_names
+
+    named = sprint_names(prepared, ctx.sprints, scanner_for(ctx.languages))
+    if not named:
+        return candidates
+    kept = list(candidates)
+    for n in named:
+        clash = [c for c in kept if c.span.start < n.span.end and n.span.start < c.span.end]
+        if all((n.span.end - n.span.start) > (c.span.end - c.span.start) for c in clash):
+            kept = [c for c in kept if c not in clash] + [n]
+    return tuple(sorted(kept, key=lambda c: c.span.start))
 
 
 def normalize_many(

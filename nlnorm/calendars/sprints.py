@@ -82,10 +82,11 @@ def sprint_key(text: str) -> str:
     return folded
 
 
-@dataclass(frozen=True)
+@dataclass(frozen=True, eq=False)
 class SprintCalendar:
     """Sprints sorted by team and start. Build with :meth:`from_rows`, :meth:`from_csv`,
-    :meth:`from_json`, :meth:`from_query` or :meth:`load`."""
+    :meth:`from_json`, :meth:`from_query` or :meth:`load`. Compared and hashed by identity
+    (a context holding one stays hashable)."""
 
     sprints: tuple[Sprint, ...]
     source: str = "sprints"

@@ -16,6 +16,7 @@ from ..model import (
     DateRef,
     DayPeriodRef,
     Duration,
+    FiscalRef,
     Grain,
     Interval,
     Kind,
@@ -27,13 +28,14 @@ from ..model import (
     Resolved,
     Rolling,
     ShiftPeriod,
+    SprintRef,
     ToDate,
     WeekdayCount,
     WeekdayRef,
     WeekendRef,
 )
 from ..parsing import Parsed
-from . import absolute, relative
+from . import absolute, calendars, relative
 from .common import Outcome, interval_value, iso, reading
 
 if TYPE_CHECKING:
@@ -65,7 +67,8 @@ def resolve(parsed: tuple[Parsed, ...], ctx: "Context") -> tuple[Resolved, ...]:
         if outcome is None:
             continue
         chosen, alternatives = outcome
-        out.append(Resolved(p.candidate, p.meaning, _kind(p.meaning), chosen, alternatives))
+        kind = Kind.SPRINT if chosen.sprints else _kind(p.meaning)
+        out.append(Resolved(p.candidate, p.meaning, kind, chosen, alternatives))
     return tuple(out)
 
 
@@ -104,8 +107,8 @@ def _bounded(m: Bounded, ctx: "Context", lang: str) -> Outcome | None:
         value = interval_value(start, end)
         word = {"since": "from the start of", "after": "from the end of",
                 "before": "up to the start of", "until": "up to the end of"}[m.relation]
-        return reading(Interval(start, end, iv.grain, value), rid,
-                       f"{word} {iv.value} [{r.reading}: {r.note}]", policy)
+        return Reading(Interval(start, end, iv.grain, value), rid,
+                       f"{word} {iv.value} [{r.reading}: {r.note}]", policy, r.sprints)
 
     return bound(chosen, None), tuple(bound(a, a.policy) for a in alts)
 
@@ -128,7 +131,16 @@ def _between(m: Between, ctx: "Context", lang: str) -> Outcome | None:
             s, e = b.interval.start, a.interval.end
             note += " (bounds were given in reverse order)"
         grain = a.interval.grain
-        return reading(Interval(s, e, grain, interval_value(s, e)), "R11", note, policy)
+        sprints = a.sprints + tuple(n for n in b.sprints if n not in a.sprints)
+        if a.sprints and b.sprints and ctx.sprints is not None:
+            # Every sprint between the two ends, not only the ends.
+            first, last = a.interval.start, b.interval.end
+            sprints = tuple(x.name for x in ctx.sprints.sprints
+                            if x.name in a.sprints + b.sprints or (
+                                first is not None and last is not None
+                                and first.date() <= x.start and x.end <= last.date()
+                                and any(y.team == x.team for y in ctx.sprints.sprints if y.name in a.sprints)))
+        return Reading(Interval(s, e, grain, interval_value(s, e)), "R11", note, policy, sprints)
 
     chosen = span(chosen_first, chosen_last, None)
     alts = []
@@ -168,9 +180,14 @@ def _resolve_end(first: Meaning, last: Meaning, start: Interval, ctx: "Context",
 # One resolver per meaning type: (meaning, ctx, declared reading id, language) -> outcome.
 _RESOLVERS: dict[type, Callable[[Any, "Context", str, str], Outcome | None]] = {
     RelativeDay: lambda m, ctx, rid, lang: relative.relative_day(m, ctx),
-    ShiftPeriod: lambda m, ctx, rid, lang: relative.shift_period_(m, ctx),
-    Offset: lambda m, ctx, rid, lang: relative.offset(m, ctx, rid),
-    Rolling: lambda m, ctx, rid, lang: relative.rolling(m, ctx),
+    ShiftPeriod: lambda m, ctx, rid, lang: calendars.shift(m, ctx) if m.grain in calendars.CALENDAR_GRAINS
+    else relative.shift_period_(m, ctx),
+    Offset: lambda m, ctx, rid, lang: calendars.offset(m, ctx, rid) if m.grain in calendars.CALENDAR_GRAINS
+    else relative.offset(m, ctx, rid),
+    Rolling: lambda m, ctx, rid, lang: calendars.rolling(m, ctx) if m.grain in calendars.CALENDAR_GRAINS
+    else relative.rolling(m, ctx),
+    SprintRef: lambda m, ctx, rid, lang: calendars.sprint_ref(m, ctx),
+    FiscalRef: lambda m, ctx, rid, lang: calendars.fiscal_ref(m, ctx),
     ToDate: lambda m, ctx, rid, lang: relative.to_date(m, ctx),
     DayPeriodRef: lambda m, ctx, rid, lang: relative.day_period(m, ctx),
     WeekendRef: lambda m, ctx, rid, lang: relative.weekend(m, ctx),

@@ -188,7 +188,9 @@ def now(m: Now, ctx: "Context") -> Outcome:
                    "the reference instant"), ()
 
 
-def duration(m: Duration, ctx: "Context") -> Outcome:
+def duration(m: Duration, ctx: "Context") -> Outcome | None:
+    if m.grain in (Grain.SPRINT, Grain.BUSINESS_DAY, Grain.FISCAL_QUARTER, Grain.FISCAL_YEAR):
+        return None  # no fixed length in ISO 8601 terms ("for 3 sprints")
     if m.grain is Grain.QUARTER:
         value = f"P{3 * m.n}M"
     elif m.grain is Grain.HALF:

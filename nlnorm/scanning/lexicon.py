@@ -39,6 +39,8 @@ REGEX_CLASSES: Mapping[str, str] = MappingProxyType(
         # four-digit year ("14-03-2026", CLDR nl), and year-first with "/" or ".".
         "numdate": r"(?:\d{1,2}[/.]\d{1,2}[/.](?:\d{4}|\d{2})|\d{1,2}-\d{1,2}-\d{4}|\d{4}[/.]\d{1,2}[/.]\d{1,2})(?![/.-]?\d)",
         "digits": r"\d{1,3}",
+        # A two-digit year after a fiscal marker ("FY27"): 2000-2099.
+        "yy": r"\d\d(?![\d.,])",
     }
 )
 

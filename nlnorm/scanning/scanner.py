@@ -359,7 +359,7 @@ def _covered(form: Form, curated: Bucket) -> bool:
     return other.lang == form.lang and other.reading == form.reading
 
 
-_DIGIT_SLOT = re.compile(r"\{(?:year|weeknum|qnum|hnum|day|day2|month2|week2|isoday|numdate|digits)\}")
+_DIGIT_SLOT = re.compile(r"\{(?:year|weeknum|qnum|hnum|day|day2|month2|week2|isoday|numdate|digits|yy)\}")
 
 
 def _needs_digits(source: str) -> bool:
