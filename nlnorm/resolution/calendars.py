@@ -157,10 +157,15 @@ def _sprint_window(n: int, direction: int, team: str | None, sprints: tuple["Spr
         done = None
         if last_done is not None and last_done - n + 1 >= 0:
             picked = sprints[last_done - n + 1 : last_done + 1]
-            done = _sprint_reading(picked, rid, f"the last {n} sprint(s){_of(team)} that ended: "
-                                   + ", ".join(s.name for s in picked) + ", up to the start of the current one"
-                                   if current is not None else f"the last {n} sprint(s){_of(team)}: "
-                                   + ", ".join(s.name for s in picked) + " (today falls between sprints)", ctx)
+            if current is not None:
+                # Up to where the current sprint starts (a gap before it is part of the past).
+                done = _sprint_reading(picked, rid, f"the last {n} sprint(s){_of(team)} that ended: "
+                                       + ", ".join(s.name for s in picked) + ", up to the start of the "
+                                       f"current one ({sprints[current].name})", ctx,
+                                       end=start_of_day(sprints[current].start, ctx.zone))
+            else:
+                done = _sprint_reading(picked, rid, f"the last {n} sprint(s){_of(team)}: "
+                                       + ", ".join(s.name for s in picked) + " (today falls between sprints)", ctx)
         cur = None
         if current is not None and current - n + 1 >= 0:
             picked = sprints[current - n + 1 : current + 1]

@@ -25,6 +25,7 @@ if TYPE_CHECKING:
 __all__ = ["sprint_names"]
 
 _CACHE: dict[tuple[int, tuple[str, ...]], tuple["SprintCalendar", re.Pattern[str] | None]] = {}
+_WORD_BEFORE = re.compile(r"(?<!\w)(\w+)\s+$")
 _BOUNDS = {"since": "R7", "after": "R8", "before": "R9", "until": "R10"}
 # Letters that continue a word in scripts written with spaces (a name or sprint word must not
 # be the start of a longer word there; in scripts without spaces anything may follow).
@@ -97,6 +98,11 @@ def _bind(prepared: Prepared, found: list[Candidate], scanner: "Scanner") -> tup
     i = 0
     while i < len(found):
         a = found[i]
+        # A short leading word before the name ("since the Foxglove sprint") joins it.
+        begin = a.span.start
+        m = _WORD_BEFORE.search(text, 0, begin)
+        if m is not None and m.group(1) in scanner.leader_words and len(m.group(1)) <= 4:
+            a = Candidate(Span(m.start(1), a.span.end), a.lang, a.reading, a.slots)
         pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)
         word = _group(pre, "c", "c2") if pre else None
         rel = _relations(scanner, word, a.lang) if word else frozenset()
