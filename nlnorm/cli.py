@@ -19,6 +19,9 @@ __all__ = ["main"]
 
 DEMO_NOW = "2026-12-02T10:00:00"
 DEMO_TZ = "Europe/Lisbon"
+DEMO_SPRINTS = "examples/demo/sprints.csv"
+DEMO_TEAM = "Wrenfold"
+DEMO_FISCAL_START = "02"
 
 
 def _context_options(p: argparse.ArgumentParser, demo: bool = False) -> None:
@@ -42,6 +45,24 @@ def _context_options(p: argparse.ArgumentParser, demo: bool = False) -> None:
                    "(default: the language's usage)")
     g.add_argument("--date-order", choices=("MDY", "DMY", "YMD"),
                    help="order of numeric dates (default: the locale's CLDR short date format)")
+    c = p.add_argument_group("team calendars")
+    c.add_argument("--sprints", metavar="FILE",
+                   help="sprint table: CSV with a header, or JSON (a list of objects); fields name, "
+                   "optional number, start, end (ISO dates; end is the last day), optional team"
+                   + (f" (default: {DEMO_SPRINTS})" if demo else ""))
+    c.add_argument("--sprint-end", choices=("inclusive", "exclusive"), default="inclusive",
+                   help="whether 'end' in the sprint table is the last day (default) or the day after")
+    c.add_argument("--team", metavar="NAME", help="the team whose sprints 'this sprint' means"
+                   + (f" (default: {DEMO_TEAM})" if demo else " (default: one reading per team)"))
+    c.add_argument("--fiscal-start", metavar="MM[-DD]",
+                   help="first month (and day) of the fiscal year, e.g. 04 or 04-06"
+                   + (f" (default: {DEMO_FISCAL_START})" if demo else " (default: the calendar year)"))
+    c.add_argument("--fiscal-name", choices=("start", "end"),
+                   help="name a fiscal year by the year it starts or ends in (default: end; FY27 "
+                   "runs 2026-04-01 to 2027-03-31 with --fiscal-start 04)")
+    c.add_argument("--holidays", metavar="CC[-SUBDIVISION]",
+                   help="public holidays for business days, e.g. US, DE-BY (the holidays package); "
+                   "the weekend comes from the locale's CLDR data")
 
 
 class _Parser(argparse.ArgumentParser):
@@ -113,7 +134,37 @@ def _context(args: argparse.Namespace, default_now: str | None = None) -> Any:
             fields[name] = value
     if args.lang:
         fields["languages"] = args.lang
+    demo = default_now is not None
+    sprints = getattr(args, "sprints", None) or (_demo_file(DEMO_SPRINTS) if demo else None)
+    if sprints:
+        from .calendars.sprints import SprintCalendar
+
+        fields["sprints"] = SprintCalendar.load(sprints, end=getattr(args, "sprint_end", "inclusive"))
+    team = getattr(args, "team", None) or (DEMO_TEAM if demo and not getattr(args, "sprints", None) else None)
+    if team:
+        fields["team"] = team
+    start = getattr(args, "fiscal_start", None) or (DEMO_FISCAL_START if demo else None)
+    if start:
+        fields["fiscal_start"] = start
+    if getattr(args, "fiscal_name", None):
+        if not start:
+            from .errors import ContextError
+
+            raise ContextError("--fiscal-name needs --fiscal-start (e.g. --fiscal-start 04)")
+        fields["fiscal_name"] = args.fiscal_name
+    if getattr(args, "holidays", None):
+        fields["holidays"] = args.holidays
     return Context.model_validate(fields)
+
+
+def _demo_file(relative: str) -> str:
+    """A demo file: from the working directory (a checkout), else next to the package."""
+    from pathlib import Path
+
+    here = Path(relative)
+    if here.is_file():
+        return str(here)
+    return str(Path(__file__).resolve().parent.parent / relative)
 
 
 def _fail(message: str) -> int:

@@ -40,7 +40,9 @@ def _sprint_reading(chosen: Sequence["Sprint"], rid: str, note: str, ctx: "Conte
     if end is not None:
         iv = Interval(iv.start, end, Grain.SPRINT, interval_value(iv.start, end))
     names = tuple(s.name for s in chosen)
-    gaps = [f"{a.name}/{b.name}" for a, b in zip(chosen, chosen[1:]) if a.end < b.start]
+    # A weekend between two sprints is no gap; business days between them are.
+    gaps = [f"{a.name} and {b.name}" for a, b in zip(chosen, chosen[1:])
+            if a.end < b.start and ctx.business.count(a.end, b.start) > 0]
     if gaps:
         note += f"; the interval includes the gap between {', '.join(gaps)}"
     return Reading(iv, rid, note, policy, names)
@@ -263,7 +265,7 @@ def _business_window(n: int, direction: int, ctx: "Context", rid: str) -> Outcom
         first = cal.step(today, -n)
         window = Interval(start_of_day(first, tz), now, Grain.BUSINESS_DAY,
                           interval_value(start_of_day(first, tz), now))
-        roll = reading(window, rid, f"from the start of the {n}th business day before today to now "
+        roll = reading(window, rid, f"from the start of business day {n} before today to now "
                                     f"({cal.describe()})")
         whole = dates(first, today, Grain.BUSINESS_DAY, ctx, value=interval_value(
             start_of_day(first, tz), start_of_day(today, tz)))
@@ -273,7 +275,7 @@ def _business_window(n: int, direction: int, ctx: "Context", rid: str) -> Outcom
         last = cal.step(today, n)
         end = start_of_day(last + timedelta(days=1), tz)
         roll = reading(Interval(now, end, Grain.BUSINESS_DAY, interval_value(now, end)), rid,
-                       f"from now to the end of the {n}th business day after today ({cal.describe()})")
+                       f"from now to the end of business day {n} after today ({cal.describe()})")
         first = cal.step(today, 1)
         cal_r = reading(dates(first, last + timedelta(days=1), Grain.BUSINESS_DAY, ctx,
                               value=interval_value(start_of_day(first, tz), end)), rid,

@@ -237,7 +237,7 @@ def test_demo_prints_the_table_of_the_demo_log(capsys):
     assert "      'last week' -> 2026-W48  [R2: the whole calendar week before the current one; " \
            "weeks start on monday]" in lines
     assert "      (no time phrase)" in lines
-    assert lines[-1].endswith("questions, 45 mentions, 0 errors") and lines[-1].startswith("40 ")
+    assert lines[-1].endswith("questions, 54 mentions, 0 errors") and lines[-1].startswith("48 ")
 
 
 def test_demo_takes_the_context_options(capsys):
