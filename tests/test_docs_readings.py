@@ -28,7 +28,8 @@ from tests.scanning.test_traps_en import TRAPS
 
 DOC = Path(__file__).resolve().parent.parent / "docs" / "readings.md"
 READINGS = [f"R{i}" for i in range(1, 24)] + ["N"]
-POLICIES = ("bias", "window_reading", "weekday_reading", "date_order", "week_start", "locale")
+POLICIES = ("bias", "window_reading", "weekday_reading", "date_order", "week_start", "locale",
+            "sprint_window", "quarters")
 
 _BLOCK = re.compile(r"^```nlnorm-example\n(.*?)^```\s*$", re.S | re.M)
 _SINGLE = {"id", "question", "now", "tz", "context", "phrase", "reading", "start", "end", "value",
