@@ -68,7 +68,9 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
     leaders: list[int] = []
     if present is None:
         present = set(_TOKEN.findall(text))
-    kinds, hot, lead, letter_gate = _state(scanner)
+    cache = scanner._cache
+    state = cache.get("words")
+    kinds, hot, lead, letter_gate = state if state is not None else _state(scanner)
     new = present.difference(kinds)
     extra: dict[str, int] = {}  # words met when the memory is full: looked at every time
     if new:
@@ -84,11 +86,12 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
             elif kind:
                 extra[word] = kind
     found = hot.intersection(present)
-    found.update(w for w, k in extra.items() if k != _LEADER)
+    if extra:
+        found.update(w for w, k in extra.items() if k != _LEADER)
     gate = scanner.unspaced_gate
     gated = gate is not None and letter_gate.search(text) is not None
-    if not gated and (not found or (_FREE_NUMBER.search(text) is None and all(
-            w[0].isdigit() for w in found))):
+    if not gated and (not found or (all(w[0].isdigit() for w in found)
+                                    and _FREE_NUMBER.search(text) is None)):
         return hits, leaders  # no time word, and every number is part of a key or a version
     size = len(text)
     for word in found:
@@ -96,29 +99,56 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
         at = text.find(word)
         while at >= 0:
             end = at + len(word)
-            if (not at or not _continues(text[at - 1])) and (end == size or not _continues(text[end])):
-                if kind == _NUMBER:
-                    prev = text[at - 1] if at else " "
-                    # Not inside a number ("2025.1") or a ticket key ("WRN-2025": common practice).
-                    if prev not in ".,:/#" and not (prev == "-" and at > 1 and text[at - 2].isalpha()):
-                        hits.append(at)
-                elif kind == _TRIGGER:
+            # A whole word: no word character either side (see _continues).
+            if at:
+                ch = text[at - 1]
+                if ch.isalnum() or ch == "_" or (not ch.isascii() and is_word_char(ch)):
+                    at = text.find(word, at + 1)
+                    continue
+            if end != size:
+                ch = text[end]
+                if ch.isalnum() or ch == "_" or (not ch.isascii() and is_word_char(ch)):
+                    at = text.find(word, at + 1)
+                    continue
+            if kind == _NUMBER:
+                prev = text[at - 1] if at else " "
+                # Not inside a number ("2025.1") or a ticket key ("WRN-2025": common practice).
+                if prev not in ".,:/#" and not (prev == "-" and at > 1 and text[at - 2].isalpha()):
                     hits.append(at)
-                else:
-                    hits.append(at + kind - _DIGIT_AT)  # "q3", "w48"
+            elif kind == _TRIGGER:
+                hits.append(at)
+            else:
+                hits.append(at + kind - _DIGIT_AT)  # "q3", "w48"
             at = text.find(word, at + 1)
     if hits or gated:
         leading = lead.intersection(present)
-        leading.update(w for w, k in extra.items() if k == _LEADER)
-        for word in leading:
-            at = text.find(word)
-            while at >= 0:
-                end = at + len(word)
-                if (not at or not _continues(text[at - 1])) and (end == size or not _continues(text[end])):
+        if extra:
+            leading.update(w for w, k in extra.items() if k == _LEADER)
+        if leading:
+            if gated:
+                low, high = 0, size
+            else:
+                # Only leaders within the lookback before a trigger are tried (_scan_exact).
+                low, high = max(0, min(hits) - scanner.lookback), max(hits)
+            for word in leading:
+                stop = high + len(word)
+                at = text.find(word, low, stop)
+                while at >= 0:
+                    end = at + len(word)
+                    if at:
+                        ch = text[at - 1]
+                        if ch.isalnum() or ch == "_" or (not ch.isascii() and is_word_char(ch)):
+                            at = text.find(word, at + 1, stop)
+                            continue
+                    if end != size:
+                        ch = text[end]
+                        if ch.isalnum() or ch == "_" or (not ch.isascii() and is_word_char(ch)):
+                            at = text.find(word, at + 1, stop)
+                            continue
                     leaders.append(at)
-                at = text.find(word, at + 1)
+                    at = text.find(word, at + 1, stop)
+            leaders.sort()
         hits.sort()
-        leaders.sort()
     if gated and scanner.unspaced_marks is not None:
         # Languages without spaces: the (large) expression runs only where a character that
         # can start one of their words stands; a question in another script skips it.
@@ -287,17 +317,21 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
     starts = scanner._cache.get("starts")
     if starts is None:
         starts = scanner._cache["starts"] = {}  # type: ignore[assignment]
-    for pos in sorted(positions):
+    for pos in sorted(positions) if len(positions) > 1 else positions:
         if pos < limit:
             continue
-        at_word = not pos or not _continues(text[pos - 1])
+        if pos:
+            ch = text[pos - 1]
+            at_word = not (ch.isalnum() or ch == "_" or (not ch.isascii() and is_word_char(ch)))
+        else:
+            at_word = True
         ch = text[pos]
         with_chars = unspaced and not (ch.isdigit() and _LATIN_AFTER_NUMBER.match(text, pos))
         first = second = ""
         if at_word:
             m0 = pair(text, pos)
             if m0 is not None:
-                first, second = m0.group(1), m0.group(2) or ""
+                first, second = m0.groups("")
                 if first[0].isdigit():
                     first = _DIGIT_KEYS[min(len(first), 4)]
                 if second and second[0].isdigit():
