@@ -9,7 +9,7 @@ from typing import TYPE_CHECKING
 
 from ..model import Candidate, Span
 from ..preparing import Prepared
-from .combine import combine
+from .combine import combine, dropped_alone
 from .typos import typo_candidates
 from .forms import CANONICAL_SLOT
 from .lexicon import REGEX_CLASSES, WORD, is_word_char
@@ -310,7 +310,7 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
                 elided = _elided_start(text, lead)  # "d'ici 3 jours": the word is "ici"
                 if elided is not None:
                     positions.add(elided)
-    found: list[Candidate] = []
+    found: list[tuple[re.Match[str], object]] = []  # (match, form) of each phrase
     limit = 0
     pair = _PAIR.match
     unspaced = scanner.unspaced
@@ -369,14 +369,24 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
                         best = (m, form)
         if best is None:
             continue
-        m, form = best
-        found.append(_candidate(m, form, scanner, prepared))
         limit = best_end
-    # Matches of "N" forms only kept shorter forms from matching inside them.
-    found = [c for c in found if c.reading != "N"]
+        # Matches of "N" forms only keep shorter forms from matching inside them.
+        if best[1].reading != "N":
+            found.append(best)
     if not found:
         return ()
-    return combine(prepared, found, scanner)
+    if len(found) == 1:
+        # A weak phrase alone with no cue around it ("may", a bare year) is dropped before
+        # it is built (combine.dropped_alone proves combine would drop it).
+        m, form = found[0]
+        slots, weak, nameable = _values(m, form, scanner, prepared)
+        if weak and dropped_alone(prepared, m.start(), m.end(), form.reading, slots, nameable,
+                                  scanner):
+            return ()
+        return combine(prepared, [Candidate(Span(m.start(), m.end()), form.lang, form.reading,
+                                            slots, weak, nameable=nameable)], scanner)
+    return combine(prepared, [_candidate(m, form, scanner, prepared) for m, form in found],
+                   scanner)
 
 
 _STARTS_SIZE = 100_000
@@ -420,6 +430,14 @@ def _longest(bucket, text: str, pos: int, m, prefer=None):  # type: ignore[no-un
 
 
 def _candidate(m, form, scanner: Scanner, prepared: Prepared) -> Candidate:  # type: ignore[no-untyped-def]
+    slots, weak, nameable = _values(m, form, scanner, prepared)
+    return Candidate(Span(m.start(), m.end()), form.lang, form.reading, slots, weak,
+                     nameable=nameable)
+
+
+def _values(m, form, scanner: Scanner, prepared: Prepared  # type: ignore[no-untyped-def]
+            ) -> tuple[tuple[tuple[str, object], ...], bool, bool]:
+    """The slots of a form's match, whether the phrase is weak, and whether it is nameable."""
     lex = scanner.lexicons.get(form.lang) or next(iter(scanner.lexicons.values()))
     slots: list[tuple[str, object]] = list(form.fixed)
     weak = form.weak
@@ -430,6 +448,8 @@ def _candidate(m, form, scanner: Scanner, prepared: Prepared) -> Candidate:  # t
         if cls in REGEX_CLASSES or cls == "day":
             if cls == "numdate":
                 value: object = raw
+            elif raw.isdigit():
+                value = int(raw)
             else:
                 digits = "".join(ch for ch in raw if ch.isdigit())
                 value = int(digits) if digits else raw
@@ -449,8 +469,7 @@ def _candidate(m, form, scanner: Scanner, prepared: Prepared) -> Candidate:  # t
         if any(before.endswith(w) for w in lex.not_temporal):
             weak = True
     nameable = weak and form.single in ("month_wide", "weekday") and not form.weak
-    return Candidate(Span(m.start(), m.end()), form.lang, form.reading, tuple(slots), weak,
-                     nameable=nameable)
+    return tuple(slots), weak, nameable
 
 
 def text_starts_digit(text: str, pos: int) -> bool:

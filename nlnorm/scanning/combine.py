@@ -17,7 +17,7 @@ from ..model import Candidate, Span
 from ..preparing import Prepared
 from .scanner import Scanner
 
-__all__ = ["combine"]
+__all__ = ["combine", "dropped_alone"]
 
 _BOUND = {"since": "R7", "after": "R8", "before": "R9", "until": "R10"}
 _DAY_READINGS = ("R12", "R18")
@@ -163,11 +163,8 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
             i += 1
             continue
         # Cheap test first: is the word before the phrase the end of some connective?
-        k = a.span.start - 1
         pre = None
-        if k >= 0 and (text[k] in glued_tails or (
-                k > 0 and text[k] == " " and (text[text.rfind(" ", 0, k) + 1:k] in last_words
-                                              or _before_spaces(text, k) in glued_tails))):
+        if _may_follow_connective(text, a.span.start, last_words, glued_tails):
             pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)
         pre_word = _group(pre, "c", "c2") if pre else None
         pre_start = _start(pre, "c", "c2") if pre else a.span.start
@@ -296,6 +293,45 @@ def combine(prepared: Prepared, found: list[Candidate], scanner: Scanner) -> tup
         out.append(replace(a, weak=False) if a.weak else a)
         i += 1
     return tuple(out)
+
+
+def _may_follow_connective(text: str, start: int, last_words: frozenset[str] | set[str],
+                           glued_tails: frozenset[str] | set[str] | str) -> bool:
+    """Whether a connective may end right before ``start``: the word before it is the last
+    word of one, or the character before it (or before the spaces before it) ends a glued
+    one. The cheap test before the connectives' expression is tried."""
+    k = start - 1
+    return k >= 0 and (text[k] in glued_tails or (
+        k > 0 and text[k] == " " and (text[text.rfind(" ", 0, k) + 1:k] in last_words
+                                      or _before_spaces(text, k) in glued_tails)))
+
+
+def dropped_alone(prepared: Prepared, start: int, end: int, reading: str,
+                  slots: tuple[tuple[str, object], ...], nameable: bool, scanner: Scanner) -> bool:
+    """Whether :func:`combine` drops a weak phrase found alone in a question, decided before
+    the phrase is built: no connective may end before it, no word after it is one, it names
+    no day ("March 3-17"), and it is not a capitalised name. When this says ``False``
+    :func:`combine` decides; when ``True`` it would have dropped the phrase by its last rule
+    (a weak phrase without a cue)."""
+    if reading in _DAY_READINGS and _slot(slots, "day") is not None \
+            and _slot(slots, "month") is not None:
+        return False
+    if nameable:
+        first, _ = prepared.to_original(start, end)
+        if prepared.original[first : first + 1].isupper():
+            return False  # a name ("the May release") or another word: combine decides
+    conn = scanner.connectives
+    if _may_follow_connective(prepared.text, start, conn.last_words, conn.glued_tails):
+        return False
+    return conn.suffix.match(prepared.text, end) is None
+
+
+def _slot(slots: tuple[tuple[str, object], ...], name: str) -> object:
+    """:meth:`Candidate.slot` of a candidate with these slots."""
+    for key, value in slots:
+        if key == name:
+            return value
+    return None
 
 
 def _closing(scanner: Scanner, text: str, end: int, lang: str) -> int | None:
