@@ -26,6 +26,8 @@ __all__ = ["sprint_names"]
 
 _CACHE: dict[tuple[int, tuple[str, ...]], tuple["SprintCalendar", re.Pattern[str] | None]] = {}
 _WORD_BEFORE = re.compile(r"(?<!\w)(\w+)\s+$")
+_POST = {"since_post": "since", "since_suffix": "since", "after_post": "after",
+         "before_post": "before", "until_post": "until"}
 _BOUNDS = {"since": "R7", "after": "R8", "before": "R9", "until": "R10"}
 # Letters that continue a word in scripts written with spaces (a name or sprint word must not
 # be the start of a longer word there; in scripts without spaces anything may follow).
@@ -117,7 +119,15 @@ def _bind(prepared: Prepared, found: list[Candidate], scanner: "Scanner") -> tup
                 i += 2
                 continue
         bound = next((r for r in ("since", "after", "before", "until") if r in rel), None)
-        if bound is not None:
+        # A postposition after the phrase ("Foxgloveスプリントから", "Foxglove 스프린트부터").
+        post = conn.suffix.match(text, a.span.end)
+        post_word = _group(post, "s", "s2") if post else None
+        post_rel = _relations(scanner, post_word, a.lang) if post_word else frozenset()
+        post_bound = next((_POST[r] for r in _POST if r in post_rel), None)
+        if post_bound is not None and post is not None:
+            out.append(Candidate(Span(a.span.start if bound is None else start, post.end()), a.lang,
+                                 _BOUNDS[post_bound], connective=post_bound, parts=(a,)))
+        elif bound is not None:
             out.append(Candidate(Span(start, a.span.end), a.lang, _BOUNDS[bound], connective=bound,
                                  parts=(a,)))
         elif rel & {"within", "from", "on_day"}:
