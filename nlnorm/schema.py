@@ -108,9 +108,26 @@ def built(cls: type[_M], **values: Any) -> _M:
     ``model_construct`` because it sets every field itself. ``tests/test_schema.py`` checks
     that the result equals a validated model, so a pydantic change cannot slip through.
     """
-    obj = cls.__new__(cls)
-    object.__setattr__(obj, "__dict__", values)
-    object.__setattr__(obj, "__pydantic_fields_set__", set(values))
-    object.__setattr__(obj, "__pydantic_extra__", None)
-    object.__setattr__(obj, "__pydantic_private__", None)
+    obj = _new(cls)
+    _set_dict(obj, values)
+    _set_fields_set(obj, set(values))
+    _set_extra(obj, None)
+    _set_private(obj, None)
     return obj
+
+
+def _slot_setter(name: str) -> Any:
+    """The setter of the storage ``name`` of pydantic's models (what ``object.__setattr__``
+    finds for it), called directly: no attribute lookup per output built."""
+    for klass in BaseModel.__mro__:
+        found = vars(klass).get(name)
+        if found is not None and hasattr(found, "__set__"):
+            return found.__set__
+    return lambda obj, value: object.__setattr__(obj, name, value)
+
+
+_new = object.__new__
+_set_dict = _slot_setter("__dict__")
+_set_fields_set = _slot_setter("__pydantic_fields_set__")
+_set_extra = _slot_setter("__pydantic_extra__")
+_set_private = _slot_setter("__pydantic_private__")
