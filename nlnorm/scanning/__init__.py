@@ -22,6 +22,7 @@ __all__ = ["scan", "scan_text", "scanner_for", "Scanner"]
 
 # A word in any script: letters, digits and the combining marks that continue them.
 _TOKEN = re.compile(f"{WORD}+")
+_ASCII_TOKEN = re.compile("[0-9A-Z_a-z]+")  # _TOKEN on ASCII text
 _DIGIT = re.compile(r"\d")
 # A number that starts a word, not inside a number ("2025.1") or after a key ("WRN-2025").
 _LATIN_AFTER_NUMBER = re.compile(r"\d+ *(?:[a-z]|$)")
@@ -48,8 +49,9 @@ def scan(prepared: Prepared, ctx: "Context") -> tuple[Candidate, ...]:
 def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     """:func:`scan` with an explicit scanner (no context needed): exact phrases, then the
     phrases a one-letter typo hid (lower confidence, see :mod:`nlnorm.scanning.typos`)."""
-    words = _TOKEN.findall(prepared.text)
-    present = set(words)
+    text = prepared.text
+    # ASCII text needs no class of every script's letters and marks: the same words, sooner.
+    present = set((_ASCII_TOKEN if text.isascii() else _TOKEN).findall(text))
     exact = _scan_exact(prepared, scanner, None, present)
     fuzzy = typo_candidates(prepared, scanner, exact, _scan_exact, present)
     if not fuzzy:
