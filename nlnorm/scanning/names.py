@@ -97,14 +97,17 @@ def _bind(prepared: Prepared, found: list[Candidate], scanner: "Scanner") -> tup
     text = prepared.text
     conn = scanner.connectives
     out: list[Candidate] = []
+    # A short leading word before a name ("since the Foxglove sprint", "dem Sprint X") joins it.
+    joined = []
+    for a in found:
+        m = _WORD_BEFORE.search(text, 0, a.span.start)
+        if m is not None and m.group(1) in scanner.leader_words and len(m.group(1)) <= 4:
+            a = Candidate(Span(m.start(1), a.span.end), a.lang, a.reading, a.slots)
+        joined.append(a)
+    found = joined
     i = 0
     while i < len(found):
         a = found[i]
-        # A short leading word before the name ("since the Foxglove sprint") joins it.
-        begin = a.span.start
-        m = _WORD_BEFORE.search(text, 0, begin)
-        if m is not None and m.group(1) in scanner.leader_words and len(m.group(1)) <= 4:
-            a = Candidate(Span(m.start(1), a.span.end), a.lang, a.reading, a.slots)
         pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)
         word = _group(pre, "c", "c2") if pre else None
         rel = _relations(scanner, word, a.lang) if word else frozenset()
