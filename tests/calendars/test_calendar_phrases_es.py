@@ -182,7 +182,7 @@ def test_fiscal(text, expected):
 
 
 def test_the_last_fiscal_quarter_is_the_rolling_three_months_as_the_last_quarter_is():
-    # Source: dateutil-free arithmetic of R5: three months back from now, to now.
+    # R5: three months back from now (2026-09-02 10:00), up to now.
     start, end = bounds(mention("el último trimestre fiscal"))
     assert end == NOW and (start.year, start.month, start.day) == (2026, 9, 2)
 
