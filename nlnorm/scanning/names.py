@@ -97,9 +97,12 @@ def _bind(prepared: Prepared, found: list[Candidate], scanner: "Scanner") -> tup
     text = prepared.text
     conn = scanner.connectives
     out: list[Candidate] = []
-    # A short leading word before a name ("since the Foxglove sprint", "dem Sprint X") joins it.
+    # A short leading word before a name ("since the Foxglove sprint", "dem Sprint X") joins it,
+    # unless it ends a connective itself ("antes del sprint X": "antes del" is the connective).
     joined = []
+    bare_starts = []
     for a in found:
+        bare_starts.append(a.span.start)
         m = _WORD_BEFORE.search(text, 0, a.span.start)
         if m is not None and m.group(1) in scanner.leader_words and len(m.group(1)) <= 4:
             a = Candidate(Span(m.start(1), a.span.end), a.lang, a.reading, a.slots)
@@ -108,9 +111,17 @@ def _bind(prepared: Prepared, found: list[Candidate], scanner: "Scanner") -> tup
     i = 0
     while i < len(found):
         a = found[i]
-        pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)
+        pre = conn.before.search(text, max(0, bare_starts[i] - 32), bare_starts[i])
         word = _group(pre, "c", "c2") if pre else None
         rel = _relations(scanner, word, a.lang) if word else frozenset()
+        if rel and bare_starts[i] != a.span.start and _start(pre, "c", "c2") >= a.span.start:
+            rel = frozenset()  # the joined word alone ("по Foxglove-спринту"): it stays joined
+        if not rel:
+            pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)
+            word = _group(pre, "c", "c2") if pre else None
+            rel = _relations(scanner, word, a.lang) if word else frozenset()
+        else:
+            a = Candidate(Span(bare_starts[i], a.span.end), a.lang, a.reading, a.slots)
         start = _start(pre, "c", "c2") if pre else a.span.start
         if i + 1 < len(found):
             b = found[i + 1]

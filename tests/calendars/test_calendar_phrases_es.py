@@ -107,9 +107,6 @@ def test_sprint_bounds_and_ranges(text, start, end):
     assert bounds(mention(text)) == (start, end)
 
 
-@pytest.mark.xfail(strict=True, reason="engine: names.py joins the short word 'del' to a named "
-                   "sprint before looking for a connective, so 'antes del' / 'a partir del' / 'después "
-                   "del' (connectives ending in 'del') are no longer found before it")
 @pytest.mark.parametrize("text, start, end", [
     ("bugs resueltos antes del sprint Inkwell", None, sprint_span("Inkwell")[0]),
     ("tickets creados a partir del sprint Foxglove", sprint_span("Foxglove")[0], None),

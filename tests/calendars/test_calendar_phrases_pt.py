@@ -108,9 +108,6 @@ def test_sprint_bounds_and_ranges(text, start, end):
     assert bounds(mention(text)) == (start, end)
 
 
-@pytest.mark.xfail(strict=True, reason="engine: names.py joins the short word 'da' to a named "
-                   "sprint before looking for a connective, so 'antes da' / 'a partir da' "
-                   "(connectives ending in 'da') are no longer found before it")
 @pytest.mark.parametrize("text, start, end", [
     ("bugs resolvidos antes da sprint Inkwell", None, sprint_span("Inkwell")[0]),
     ("tickets criados a partir da sprint Foxglove", sprint_span("Foxglove")[0], None),
