@@ -66,6 +66,7 @@ def _alternative(r: Reading) -> Alternative:
         reading=r.reading,
         policy=r.policy,
         note=r.note,
+        sprints=r.sprints,
     )
 
 
@@ -138,6 +139,7 @@ def annotate(prepared: Prepared, resolved: tuple[Resolved, ...], ctx: "Context",
                 note=_typo_note(r) + r.chosen.note,
                 confidence=r.candidate.confidence,
                 alternatives=tuple(_alternative(a) for a in r.alternatives),
+                sprints=r.chosen.sprints,
             )
         )
         name = f"t{index}"

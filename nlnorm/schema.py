@@ -27,12 +27,14 @@ class Alternative(_Out):
     end: str | None = Field(description="exclusive end, ISO 8601 with UTC offset; null if unbounded")
     value: str = Field(description="ISO 8601 form of the alternative")
     grain: str
-    reading: str = Field(description="the reading id (R1-R23) of this alternative")
+    reading: str = Field(description="the reading id (R1-R26) of this alternative")
     policy: str | None = Field(
         description="the context setting that selects this reading, e.g. 'bias=future'; null "
         "when no setting does (reword the question instead)"
     )
     note: str = Field(description="how the phrase is read this way, in plain words")
+    sprints: tuple[str, ...] = Field(default=(), description="the sprints this reading covers "
+                                     "(sprint readings only), by name")
 
 
 class Mention(_Out):
@@ -44,18 +46,21 @@ class Mention(_Out):
     kind: str = Field(description="range | instant | duration | sprint | number | person | value")
     start: str | None = Field(description="inclusive start, ISO 8601 with UTC offset; null if unbounded")
     end: str | None = Field(description="exclusive end, ISO 8601 with UTC offset; null if unbounded")
-    grain: str = Field(description="minute | hour | day | week | month | quarter | half | year | sprint")
+    grain: str = Field(description="minute | hour | day | week | month | quarter | half | year | "
+                       "sprint | business_day | fiscal_quarter | fiscal_year")
     value: str = Field(description="ISO 8601 form: 2026-12-01, 2026-W48, 2026-11, 2026-Q4, 2026-H2, "
                        "2026, P3D, or an interval: calendar dates with the end date included "
                        "(2026-03-01/2026-04-15, ../2026-02-28) or date-times with offset; "
                        "'..' is an open end (ISO 8601-2); start and end are always exact")
     lang: str = Field(description="language that matched the phrase ('und' for ISO notation)")
-    reading: str = Field(description="the default-reading id it used (R1-R23; see docs/readings.md)")
+    reading: str = Field(description="the default-reading id it used (R1-R26; see docs/readings.md)")
     note: str = Field(description="how the phrase was read, in plain words")
     confidence: float = Field(1.0, description="1.0, lower for a phrase matched with a typo")
     alternatives: tuple[Alternative, ...] = Field(
         default=(), description="other plausible readings, each with the policy selecting it"
     )
+    sprints: tuple[str, ...] = Field(default=(), description="kind 'sprint': the names of the "
+                                     "sprints the interval covers, from the sprint table")
 
 
 class Slot(_Out):

@@ -96,7 +96,9 @@ def _connective_lang(scanner: Scanner, phrase: str, lang: str) -> str:
 
 def _is_day(c: Candidate) -> bool:
     """A phrase naming one day (a weekday, a date, "the weekend"): "on" goes with it."""
-    return c.reading in ("R1", "R13", "R14", "R15", "R16", "R18", "R23") or _has_day(c)
+    return c.reading in ("R1", "R13", "R14", "R15", "R16", "R18", "R23") or _has_day(c) or (
+        c.slot("unit") == "business_day" and (c.reading in ("R2", "R3", "R4") or (
+            c.reading in ("R5", "R6") and c.slot("num") is None)))  # "on the last working day"
 
 
 def _has_day(c: Candidate) -> bool:
