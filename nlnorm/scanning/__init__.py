@@ -168,17 +168,12 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
         hits.extend(m.start() for m in _GLUED_NUMBER.finditer(text))
         hits.sort()
         leaders.sort()
-    elif gate is not None and hits and _DIGIT.search(text) is not None:
-        # A number that starts a phrase of a language without spaces ("3天前", "2025年").
-        marks = scanner.unspaced_marks.match  # type: ignore[union-attr]
-        for at in list(hits):
-            m = marks(text, at) if text[at].isdigit() else None
-            if m is not None and m.end() > at and m.lastgroup != "t":
-                leaders.append(at)
-        if not text.isascii():
-            hits.extend(m.start() for m in _GLUED_NUMBER.finditer(text))
-            hits = sorted(set(hits))
-        leaders.sort()
+    elif gate is not None and hits and not text.isascii() and _DIGIT.search(text) is not None:
+        # A number glued after a letter of another script ("с2025"). A number that starts a
+        # phrase of a language without spaces ("3天前") is a hit already, so the forms starting
+        # there are tried; as a leader it would add no place to try.
+        hits.extend(m.start() for m in _GLUED_NUMBER.finditer(text))
+        hits = sorted(set(hits))
     return hits, leaders
 
 
