@@ -194,16 +194,32 @@ def _state(scanner: Scanner) -> _State:
     found = scanner._cache.get("words")
     if found is None:
         gate = scanner.unspaced_gate
-        # Digits are found as words of their own; the gate looks for the letters only.
-        letters = re.compile(re.sub(r"[0-9]", "", gate.pattern)) if gate is not None else _NEVER
-        if letters.pattern in ("[]", ""):
-            letters = _NEVER
+        # The languages without spaces are looked for only in a question holding a character of
+        # a script other than Latin, Greek or Cyrillic: digits are found as words of their own,
+        # and a Latin word of theirs ("下一个sprint", "Sprint 42里") stands in such a question.
+        # A language without spaces written in one of those scripts (some of the CLDR tier) is
+        # looked for wherever one of its words can start.
+        letters = _NEVER
+        if gate is not None:
+            from .. import cldr
+            from ..preparing import fold
+
+            latin = False
+            for lang, lex in scanner.lexicons.items():
+                if lex.spaces:
+                    continue
+                texts = [f.text for f in cldr.relative_fields(lang)] if lang != "und" else []
+                other = sum(1 for t in texts if _OTHER_SCRIPT.search(fold(t)))
+                latin = latin or (bool(texts) and other * 2 < len(texts))
+            # With such a language on, every character that can start a word of theirs counts.
+            letters = re.compile(re.sub(r"[0-9]", "", gate.pattern)) if latin else _OTHER_SCRIPT
         found = ({}, set(), set(), letters)
         scanner._cache["words"] = found  # type: ignore[assignment]
     return found  # type: ignore[return-value]
 
 
 _NEVER = re.compile(r"(?!)")
+_OTHER_SCRIPT = re.compile(r"[^\x00-\u024f\u0300-\u052f\u1e00-\u1eff\u2000-\u206f]")
 
 
 def _kind(tok: str, scanner: Scanner) -> int:
