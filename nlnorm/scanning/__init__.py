@@ -326,7 +326,8 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
     found: list[tuple[re.Match[str], object]] = []  # (match, form) of each phrase
     limit = 0
     pair = _PAIR.match
-    unspaced = scanner.unspaced
+    # The forms of languages without spaces are tried only where _marks looks for them.
+    unspaced = scanner.unspaced and _state(scanner)[3].search(text) is not None
     starts = scanner._cache.get("starts")
     if starts is None:
         starts = scanner._cache["starts"] = {}  # type: ignore[assignment]
