@@ -308,9 +308,10 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
                 k == 1 or not text[k - 2].isalnum()):
             positions.add(k - 1)
         # An elided word glued to it by an apostrophe starts a form too ("l'année", "dell'anno").
-        elided = _elided_start(text, k)
-        if elided is not None:
-            positions.add(elided)
+        if k > 1 and text[k - 1] == "'":
+            elided = _elided_start(text, k)
+            if elided is not None:
+                positions.add(elided)
     if leaders:
         back = scanner.lookback
         for hit in hits:
@@ -320,9 +321,10 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
                 j -= 1
             for lead in leaders[j:k]:
                 positions.add(lead)
-                elided = _elided_start(text, lead)  # "d'ici 3 jours": the word is "ici"
-                if elided is not None:
-                    positions.add(elided)
+                if lead > 1 and text[lead - 1] == "'":  # "d'ici 3 jours": the word is "ici"
+                    elided = _elided_start(text, lead)
+                    if elided is not None:
+                        positions.add(elided)
     found: list[tuple[re.Match[str], object]] = []  # (match, form) of each phrase
     limit = 0
     pair = _PAIR.match
