@@ -98,20 +98,7 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
     size = len(text)
     for word in found:
         kind = kinds.get(word) or extra[word]
-        at = text.find(word)
-        while at >= 0:
-            end = at + len(word)
-            # A whole word: no word character either side (see _continues).
-            if at:
-                ch = text[at - 1]
-                if ch.isalnum() or ch == "_" or (not ch.isascii() and is_word_char(ch)):
-                    at = text.find(word, at + 1)
-                    continue
-            if end != size:
-                ch = text[end]
-                if ch.isalnum() or ch == "_" or (not ch.isascii() and is_word_char(ch)):
-                    at = text.find(word, at + 1)
-                    continue
+        for at in _whole_words(text, word, 0, size):
             if kind == _NUMBER:
                 prev = text[at - 1] if at else " "
                 # Not inside a number ("2025.1") or a ticket key ("WRN-2025": common practice).
@@ -121,7 +108,6 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
                 hits.append(at)
             else:
                 hits.append(at + kind - _DIGIT_AT)  # "q3", "w48"
-            at = text.find(word, at + 1)
     if hits or gated:
         leading = lead.intersection(present)
         if extra:
@@ -133,22 +119,7 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
                 # Only leaders within the lookback before a trigger are tried (_scan_exact).
                 low, high = max(0, min(hits) - scanner.lookback), max(hits)
             for word in leading:
-                stop = high + len(word)
-                at = text.find(word, low, stop)
-                while at >= 0:
-                    end = at + len(word)
-                    if at:
-                        ch = text[at - 1]
-                        if ch.isalnum() or ch == "_" or (not ch.isascii() and is_word_char(ch)):
-                            at = text.find(word, at + 1, stop)
-                            continue
-                    if end != size:
-                        ch = text[end]
-                        if ch.isalnum() or ch == "_" or (not ch.isascii() and is_word_char(ch)):
-                            at = text.find(word, at + 1, stop)
-                            continue
-                    leaders.append(at)
-                    at = text.find(word, at + 1, stop)
+                leaders.extend(_whole_words(text, word, low, high + len(word)))
             leaders.sort()
         hits.sort()
     if gated and scanner.unspaced_marks is not None:
@@ -183,9 +154,22 @@ _KINDS_SIZE = 200_000  # words remembered per scanner (a question log repeats it
 _State = tuple[dict[str, int], set[str], set[str], re.Pattern[str]]
 
 
-def _continues(ch: str) -> bool:
-    """:func:`is_word_char`, quicker for the common case of a space or a letter."""
-    return ch.isalnum() or ch == "_" or (not ch.isascii() and is_word_char(ch))
+def _whole_words(text: str, word: str, low: int, stop: int) -> list[int]:
+    """Where ``word`` stands in ``text[low:stop]`` as a whole word: no word character (see
+    :func:`is_word_char`, tested quickly for the common case of a space or a letter) on
+    either side."""
+    out: list[int] = []
+    size = len(text)
+    at = text.find(word, low, stop)
+    while at >= 0:
+        end = at + len(word)
+        before = text[at - 1] if at else " "
+        after = text[end] if end != size else " "
+        if not (before.isalnum() or before == "_" or (not before.isascii() and is_word_char(before))) and \
+                not (after.isalnum() or after == "_" or (not after.isascii() and is_word_char(after))):
+            out.append(at)
+        at = text.find(word, at + 1, stop)
+    return out
 
 
 def _state(scanner: Scanner) -> _State:
