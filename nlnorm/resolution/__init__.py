@@ -132,14 +132,13 @@ def _between(m: Between, ctx: "Context", lang: str) -> Outcome | None:
             note += " (bounds were given in reverse order)"
         grain = a.interval.grain
         sprints = a.sprints + tuple(n for n in b.sprints if n not in a.sprints)
-        if a.sprints and b.sprints and ctx.sprints is not None:
-            # Every sprint between the two ends, not only the ends.
-            first, last = a.interval.start, b.interval.end
-            sprints = tuple(x.name for x in ctx.sprints.sprints
-                            if x.name in a.sprints + b.sprints or (
-                                first is not None and last is not None
-                                and first.date() <= x.start and x.end <= last.date()
-                                and any(y.team == x.team for y in ctx.sprints.sprints if y.name in a.sprints)))
+        first, last = a.interval.start, b.interval.end
+        if a.sprints and b.sprints and ctx.sprints is not None and first is not None and last is not None:
+            # Every sprint of the first end's team between the two ends, not only the ends.
+            ends = set(a.sprints + b.sprints)
+            teams = {x.team for x in ctx.sprints.sprints if x.name in a.sprints}
+            sprints = tuple(x.name for x in ctx.sprints.sprints if x.name in ends or (
+                x.team in teams and first.date() <= x.start and x.end <= last.date()))
         return Reading(Interval(s, e, grain, interval_value(s, e)), "R11", note, policy, sprints)
 
     chosen = span(chosen_first, chosen_last, None)

@@ -12,7 +12,7 @@ from __future__ import annotations
 from datetime import date, datetime, timedelta
 from typing import TYPE_CHECKING, Any, Sequence
 
-from ..calendars import add_units, start_of_day
+from ..calendars import add_units, day_span, start_of_day
 from ..calendars.fiscal import FiscalYear
 from ..model import FiscalRef, Grain, Interval, Offset, Reading, Rolling, ShiftPeriod, SprintRef
 from .common import Outcome, dates, instants, interval_value, reading
@@ -300,22 +300,16 @@ def _fy_name(year: int) -> str:
     return f"FY{year}"
 
 
-def _fiscal_year_reading(cal: Any, year: int, rid: str, note: str, ctx: "Context",
-                         policy: str | None = None) -> Reading:
-    first, end = cal.year_span(year)
-    iv = dates(first, end, Grain.FISCAL_YEAR, ctx, value=interval_value(
+def _fiscal_reading(cal: Any, year: int, q: int | None, rid: str, note: str, ctx: "Context",
+                    policy: str | None = None, describe: str = "") -> Reading:
+    """Fiscal year ``year`` of ``cal``, or its quarter ``q``, as a reading whose note names it
+    and its days."""
+    first, end = cal.year_span(year) if q is None else cal.quarter_span(year, q)
+    grain = Grain.FISCAL_YEAR if q is None else Grain.FISCAL_QUARTER
+    iv = dates(first, end, grain, ctx, value=interval_value(
         start_of_day(first, ctx.zone), start_of_day(end, ctx.zone)))
-    return reading(iv, rid, f"{note}: {_fy_name(year)}, {first.isoformat()} to "
-                            f"{(end - timedelta(days=1)).isoformat()} ({cal.describe() if hasattr(cal, 'describe') else ''})",
-                   policy)
-
-
-def _fiscal_quarter_reading(cal: Any, year: int, q: int, rid: str, note: str, ctx: "Context",
-                            policy: str | None = None, describe: str = "") -> Reading:
-    first, end = cal.quarter_span(year, q)
-    iv = dates(first, end, Grain.FISCAL_QUARTER, ctx, value=interval_value(
-        start_of_day(first, ctx.zone), start_of_day(end, ctx.zone)))
-    return reading(iv, rid, f"{note}: Q{q} {_fy_name(year)}, {first.isoformat()} to "
+    name = _fy_name(year) if q is None else f"Q{q} {_fy_name(year)}"
+    return reading(iv, rid, f"{note}: {name}, {first.isoformat()} to "
                             f"{(end - timedelta(days=1)).isoformat()} ({describe or cal.describe()})", policy)
 
 
@@ -330,14 +324,10 @@ def _fiscal_shift(grain: Grain, k: int, ctx: "Context", rid: str) -> Outcome:
     which = {-1: "the fiscal {} before the current one", 0: "the current fiscal {}",
              1: "the fiscal {} after the current one"}.get(k, "the fiscal {} " + f"{k:+d} from the current one")
     if grain is Grain.FISCAL_YEAR:
-        year = cal.year_of(today) + k
-        first, end = cal.year_span(year)
-        iv = dates(first, end, Grain.FISCAL_YEAR, ctx, value=interval_value(
-            start_of_day(first, ctx.zone), start_of_day(end, ctx.zone)))
-        return reading(iv, rid, f"{which.format('year')}: {_fy_name(year)}, {first.isoformat()} to "
-                                f"{(end - timedelta(days=1)).isoformat()} ({describe})"), ()
+        return _fiscal_reading(cal, cal.year_of(today) + k, None, rid, which.format("year"), ctx,
+                               describe=describe), ()
     year, q = _quarter_plus(*cal.quarter_of(today), k)
-    return _fiscal_quarter_reading(cal, year, q, rid, which.format("quarter"), ctx, describe=describe), ()
+    return _fiscal_reading(cal, year, q, rid, which.format("quarter"), ctx, describe=describe), ()
 
 
 def _fiscal_window(grain: Grain, n: int, direction: int, ctx: "Context", rid: str) -> Outcome:
@@ -381,23 +371,23 @@ def fiscal_ref(m: FiscalRef, ctx: "Context") -> Outcome | None:
         if m.quarter is None:
             return None
         year = cal.year_of(today)
-        chosen = _fiscal_quarter_reading(cal, year, m.quarter, rid, "that quarter of the current fiscal year",
+        chosen = _fiscal_reading(cal, year, m.quarter, rid, "that quarter of the current fiscal year",
                                          ctx, describe=describe)
         start, end = cal.quarter_span(year, m.quarter)
         if today < start and ctx.bias == "past":
             alts.append(Reading(chosen.interval, rid, chosen.note, "bias=future"))
-            chosen = _fiscal_quarter_reading(cal, year - 1, m.quarter, rid, "the most recent such fiscal "
+            chosen = _fiscal_reading(cal, year - 1, m.quarter, rid, "the most recent such fiscal "
                                              "quarter (it has not begun this fiscal year)", ctx, describe=describe)
         elif today >= end and ctx.bias == "future":
             alts.append(Reading(chosen.interval, rid, chosen.note, "bias=past"))
-            chosen = _fiscal_quarter_reading(cal, year + 1, m.quarter, rid, "the next such fiscal quarter",
+            chosen = _fiscal_reading(cal, year + 1, m.quarter, rid, "the next such fiscal quarter",
                                              ctx, describe=describe)
         return chosen, tuple(alts) + _calendar_quarter(m, ctx)
     said = f"FY{m.year % 100:02d}" if m.two_digit else _fy_name(m.year)
     if m.quarter is None:
-        chosen = _fiscal_year_reading(cal, m.year, rid, f"{said} as written", ctx)
+        chosen = _fiscal_reading(cal, m.year, None, rid, f"{said} as written", ctx)
     else:
-        chosen = _fiscal_quarter_reading(cal, m.year, m.quarter, rid, f"Q{m.quarter} {said} as written", ctx,
+        chosen = _fiscal_reading(cal, m.year, m.quarter, rid, f"Q{m.quarter} {said} as written", ctx,
                                          describe=describe)
     naming = getattr(cal, "naming", "end")
     if ctx.fiscal is not None and _naming_matters(cal):
@@ -406,10 +396,7 @@ def fiscal_ref(m: FiscalRef, ctx: "Context") -> Outcome | None:
         other_naming = "start" if naming == "end" else "end"
         other = dataclasses.replace(cal, naming=other_naming)
         note = f"{said} named by the year it {'starts' if other_naming == 'start' else 'ends'} in"
-        if m.quarter is None:
-            alts.append(_fiscal_year_reading(other, m.year, rid, note, ctx, f"fiscal_name={other_naming}"))
-        else:
-            alts.append(_fiscal_quarter_reading(other, m.year, m.quarter, rid, note, ctx, f"fiscal_name={other_naming}"))
+        alts.append(_fiscal_reading(other, m.year, m.quarter, rid, note, ctx, f"fiscal_name={other_naming}"))
     return chosen, tuple(alts) + _calendar_quarter(m, ctx)
 
 
@@ -423,8 +410,7 @@ def _calendar_quarter(m: FiscalRef, ctx: "Context") -> tuple[Reading, ...]:
         return ()
     today = ctx.now.date()
     year = m.year if m.year is not None else today.year
-    first = date(year, 3 * (m.quarter - 1) + 1, 1)
-    end = date(year + (m.quarter == 4), (3 * m.quarter) % 12 + 1, 1)
+    first, end = day_span(date(year, 3 * (m.quarter - 1) + 1, 1), Grain.QUARTER)
     return (reading(dates(first, end, Grain.QUARTER, ctx), "R12" if m.year is None else "R19",
                     f"the calendar quarter {year}-Q{m.quarter}", "quarters=calendar"),)
 
