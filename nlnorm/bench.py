@@ -11,7 +11,6 @@ from __future__ import annotations
 import gc
 import json
 import os
-import resource
 import statistics
 import subprocess
 import sys
@@ -80,11 +79,6 @@ def cli_startup(runs: int = 7, lang: str | None = "en") -> float:
 
     shutil.rmtree(cache, ignore_errors=True)
     return statistics.median(times)
-
-
-def _rss_mb() -> float:
-    # ru_maxrss is in KiB on Linux.
-    return resource.getrusage(resource.RUSAGE_SELF).ru_maxrss / 1024
 
 
 _RSS_SCRIPT = """
