@@ -26,9 +26,6 @@ __all__ = ["sprint_names"]
 
 _CACHE: dict[tuple[int, tuple[str, ...]], tuple["SprintCalendar", re.Pattern[str] | None]] = {}
 _WORD_BEFORE = re.compile(r"(?<!\w)(\w+)\s+$")
-_POST = {"since_post": "since", "since_suffix": "since", "after_post": "after",
-         "before_post": "before", "until_post": "until"}
-_BOUNDS = {"since": "R7", "after": "R8", "before": "R9", "until": "R10"}
 # Letters that continue a word in scripts written with spaces (a name or sprint word must not
 # be the start of a longer word there; in scripts without spaces anything may follow).
 _SPACED_LETTER = r"[0-9A-Za-z\u00c0-\u024f\u0370-\u03ff\u0400-\u052f]"
@@ -92,7 +89,7 @@ def _lang_of(scanner: "Scanner", word: str) -> str:
 
 def _bind(prepared: Prepared, found: list[Candidate], scanner: "Scanner") -> tuple[Candidate, ...]:
     """Connectives before a named sprint, and ranges between two named sprints."""
-    from .combine import _group, _relations, _start
+    from .combine import _BOUND, _POST_BOUND, _group, _relations, _start
 
     text = prepared.text
     conn = scanner.connectives
@@ -137,12 +134,12 @@ def _bind(prepared: Prepared, found: list[Candidate], scanner: "Scanner") -> tup
         post = conn.suffix.match(text, a.span.end)
         post_word = _group(post, "s", "s2") if post else None
         post_rel = _relations(scanner, post_word, a.lang) if post_word else frozenset()
-        post_bound = next((_POST[r] for r in _POST if r in post_rel), None)
+        post_bound = next((_POST_BOUND[r] for r in _POST_BOUND if r in post_rel), None)
         if post_bound is not None and post is not None:
             out.append(Candidate(Span(a.span.start if bound is None else start, post.end()), a.lang,
-                                 _BOUNDS[post_bound], connective=post_bound, parts=(a,)))
+                                 _BOUND[post_bound], connective=post_bound, parts=(a,)))
         elif bound is not None:
-            out.append(Candidate(Span(start, a.span.end), a.lang, _BOUNDS[bound], connective=bound,
+            out.append(Candidate(Span(start, a.span.end), a.lang, _BOUND[bound], connective=bound,
                                  parts=(a,)))
         elif rel & {"within", "from", "on_day"}:
             out.append(Candidate(Span(start, a.span.end), a.lang, "R24", a.slots))
