@@ -140,6 +140,10 @@ def _context(args: argparse.Namespace, default_now: str | None = None) -> Any:
         from .calendars.sprints import SprintCalendar
 
         fields["sprints"] = SprintCalendar.load(sprints, end=getattr(args, "sprint_end", "inclusive"))
+    if getattr(args, "team", None) and not sprints:
+        from .errors import ContextError
+
+        raise ContextError("--team needs --sprints FILE (the sprint table the team's sprints are in)")
     team = getattr(args, "team", None) or (DEMO_TEAM if demo and not getattr(args, "sprints", None) else None)
     if team:
         fields["team"] = team

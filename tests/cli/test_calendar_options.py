@@ -51,6 +51,11 @@ def test_an_unknown_team_is_refused_with_the_known_ones(capsys):
     assert code == 2 and "team='Wrenfeld' has no sprint" in err and "'Wrenfold'" in err
 
 
+def test_a_team_without_a_sprint_table_is_refused(capsys):
+    code, _, err = cli(capsys, "normalize", "this sprint", *CLOCK, "--team", "Wrenfold")
+    assert code == 2 and "--team needs --sprints FILE" in err
+
+
 def test_fiscal_start_and_name(capsys):
     m = mention(capsys, "releases in FY27", "--fiscal-start", "02", "--lang", "en")
     assert (m["start"], m["end"]) == ("2026-02-01T00:00:00+01:00", "2027-02-01T00:00:00+01:00")
