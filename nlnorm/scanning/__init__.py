@@ -29,7 +29,7 @@ _LATIN_AFTER_NUMBER = re.compile(r"\d+ *(?:[a-z]|$)")
 _FREE_NUMBER = re.compile(r"(?<![\w.,:/#])(?<![^\W\d_]-)\d")
 # A number right after a letter that is not a Latin one ("到2025", "以来3"), in languages written
 # without spaces; Latin letters before digits make ticket keys and versions ("v2", "q3").
-_GLUED_NUMBER = re.compile(r"(?<=[^\W\d_])(?<![a-zA-Z])\d")
+_GLUED_NUMBER = re.compile(r"[^\W\d_a-zA-Z](?=\d)")  # the number starts at the match's end
 # The first two runs at a position: letters, digits, or one other character (see runs_key).
 _PAIR = re.compile(r"([^\W\d_]+|\d+|[^\w\s])\s*([^\W\d_]+|\d+|[^\w\s])?")
 
@@ -43,7 +43,17 @@ def scan(prepared: Prepared, ctx: "Context") -> tuple[Candidate, ...]:
     >>> [(c.reading, c.slots) for c in scan(prepare("bugs from last week"), ctx)]
     [('R2', (('dir', -1), ('unit', 'week')))]
     """
-    return scan_text(prepared, scanner_for(ctx.languages))
+    global _last_scanner
+    last = _last_scanner  # one tuple, read at once: safe when threads share the module
+    languages = ctx.languages
+    if last is None or last[0] is not languages:
+        # Hashing the tuple of languages for scanner_for's cache costs more than this check.
+        last = _last_scanner = (languages, scanner_for(languages))
+    return scan_text(prepared, last[1])
+
+
+#: (languages, their scanner): a batch uses one context throughout.
+_last_scanner: tuple[tuple[str, ...], Scanner] | None = None
 
 
 def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
@@ -72,7 +82,7 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
         present = set(_TOKEN.findall(text))
     cache = scanner._cache
     state = cache.get("words")
-    kinds, hot, lead, letter_gate = state if state is not None else _state(scanner)
+    kinds, hot, lead, numbers, letter_gate = state if state is not None else _state(scanner)
     new = present.difference(kinds)
     extra: dict[str, int] = {}  # words met when the memory is full: looked at every time
     if new:
@@ -85,6 +95,8 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
                     lead.add(word)
                 elif kind:
                     hot.add(word)
+                    if kind == _NUMBER:
+                        numbers.add(word)
             elif kind:
                 extra[word] = kind
     found = hot.intersection(present)
@@ -92,7 +104,7 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
         found.update(w for w, k in extra.items() if k != _LEADER)
     gate = scanner.unspaced_gate
     gated = gate is not None and letter_gate.search(text) is not None
-    if not gated and (not found or (all(w[0].isdigit() for w in found)
+    if not gated and (not found or (found.issubset(numbers) and not extra
                                     and _FREE_NUMBER.search(text) is None)):
         return hits, leaders  # no time word, and every number is part of a key or a version
     size = len(text)
@@ -136,14 +148,14 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
                 (hits if m.lastgroup == "t" else leaders).append(at)
                 end = m.end()
         # A number glued after a word of a script written without spaces ("到2025-03-31").
-        hits.extend(m.start() for m in _GLUED_NUMBER.finditer(text))
+        hits.extend(m.end() for m in _GLUED_NUMBER.finditer(text))
         hits.sort()
         leaders.sort()
     elif gate is not None and hits and not text.isascii() and _DIGIT.search(text) is not None:
         # A number glued after a letter of another script ("с2025"). A number that starts a
         # phrase of a language without spaces ("3天前") is a hit already, so the forms starting
         # there are tried; as a leader it would add no place to try.
-        hits.extend(m.start() for m in _GLUED_NUMBER.finditer(text))
+        hits.extend(m.end() for m in _GLUED_NUMBER.finditer(text))
         hits = sorted(set(hits))
     return hits, leaders
 
@@ -151,7 +163,7 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
 # What a word of a question is to the scanner (see _kind); "q3" is _DIGIT_AT + 1.
 _NOTHING, _TRIGGER, _LEADER, _NUMBER, _DIGIT_AT = 0, 1, 2, 3, 4
 _KINDS_SIZE = 200_000  # words remembered per scanner (a question log repeats its vocabulary)
-_State = tuple[dict[str, int], set[str], set[str], re.Pattern[str]]
+_State = tuple[dict[str, int], set[str], set[str], set[str], re.Pattern[str]]
 
 
 def _whole_words(text: str, word: str, low: int, stop: int) -> list[int]:
@@ -174,7 +186,7 @@ def _whole_words(text: str, word: str, low: int, stop: int) -> list[int]:
 
 def _state(scanner: Scanner) -> _State:
     """What the words met so far are to ``scanner``: every word's kind, the words that
-    trigger, the words that lead, and the gate of letters of the languages without spaces."""
+    trigger, the words that lead, the numbers among the triggers, and the gate of letters of the languages without spaces."""
     found = scanner._cache.get("words")
     if found is None:
         gate = scanner.unspaced_gate
@@ -197,7 +209,7 @@ def _state(scanner: Scanner) -> _State:
                 latin = latin or (bool(texts) and other * 2 < len(texts))
             # With such a language on, every character that can start a word of theirs counts.
             letters = re.compile(re.sub(r"[0-9]", "", gate.pattern)) if latin else _OTHER_SCRIPT
-        found = ({}, set(), set(), letters)
+        found = ({}, set(), set(), set(), letters)
         scanner._cache["words"] = found  # type: ignore[assignment]
     return found  # type: ignore[return-value]
 
@@ -313,7 +325,7 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
     limit = 0
     pair = _PAIR.match
     # The forms of languages without spaces are tried only where _marks looks for them.
-    unspaced = scanner.unspaced and _state(scanner)[3].search(text) is not None
+    unspaced = scanner.unspaced and _state(scanner)[4].search(text) is not None
     starts = scanner._cache.get("starts")
     if starts is None:
         starts = scanner._cache["starts"] = {}  # type: ignore[assignment]
