@@ -10,7 +10,7 @@ from typing import TYPE_CHECKING
 from ..model import Candidate, Span
 from ..preparing import Prepared
 from .combine import combine, dropped_alone
-from .typos import typo_candidates
+from .typos import holds_typo, index_of, typo_candidates
 from .forms import CANONICAL_SLOT
 from .lexicon import REGEX_CLASSES, WORD, is_word_char
 from .scanner import Scanner, scanner_for
@@ -62,51 +62,73 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     text = prepared.text
     # ASCII text needs no class of every script's letters and marks: the same words, sooner.
     present = set((_ASCII_TOKEN if text.isascii() else _TOKEN).findall(text))
-    exact = _scan_exact(prepared, scanner, None, present)
-    fuzzy = typo_candidates(prepared, scanner, exact, _scan_exact, present)
+    hits, leaders, typo = _marks(text, scanner, present)
+    exact = _scan_exact(prepared, scanner, None, (hits, leaders))
+    if not typo:
+        return exact  # no word of the question is one edit from a time word
+    fuzzy = typo_candidates(prepared, scanner, exact, _scan_exact)
     if not fuzzy:
         return exact
     return tuple(sorted(exact + fuzzy, key=lambda c: c.span.start))
 
 
-def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tuple[list[int], list[int]]:
+def _marks(text: str, scanner: Scanner, present: set[str] | None = None
+           ) -> tuple[list[int], list[int], bool]:
     """Positions of trigger words and of leading words, in one pass over the words of
     ``text`` (set lookups: no expression over every word of every language to compile), plus
-    the expression of the languages written without spaces.
+    the expression of the languages written without spaces; and whether a word may be a
+    misspelt time word (see :func:`typos.holds_typo`).
 
-    What each word is (trigger, leader, number, nothing) is remembered per scanner, so a
-    question whose words are all known non-triggers leaves after a few set operations."""
+    What each word is (trigger, leader, number, nothing; misspelt or not) is remembered per
+    scanner, so a question whose words are all known to be nothing leaves after two set
+    operations."""
     hits: list[int] = []
     leaders: list[int] = []
     if present is None:
         present = set(_TOKEN.findall(text))
     cache = scanner._cache
     state = cache.get("words")
-    kinds, hot, lead, numbers, letter_gate = state if state is not None else _state(scanner)
+    kinds, notable, numbers, typos, letter_gate = state if state is not None else _state(scanner)
     new = present.difference(kinds)
     extra: dict[str, int] = {}  # words met when the memory is full: looked at every time
+    typo = False
     if new:
         room = len(kinds) < _KINDS_SIZE
+        index = index_of(scanner)
         for word in new:
             kind = _kind(word, scanner)
+            bad = holds_typo(word, index)
             if room:
                 kinds[word] = kind
-                if kind == _LEADER:
-                    lead.add(word)
-                elif kind:
-                    hot.add(word)
-                    if kind == _NUMBER:
-                        numbers.add(word)
-            elif kind:
-                extra[word] = kind
-    found = hot.intersection(present)
-    if extra:
-        found.update(w for w, k in extra.items() if k != _LEADER)
+                if kind or bad:
+                    notable.add(word)
+                if kind == _NUMBER:
+                    numbers.add(word)
+                if bad:
+                    typos.add(word)
+            else:
+                typo = typo or bad
+                if kind:
+                    extra[word] = kind
+    # The words that are something: triggers, leaders, numbers, words that may be misspelt.
+    seen = notable.intersection(present)
+    found: list[str] = []
+    leading: list[str] = []
+    for word in seen:
+        kind = kinds[word]
+        if kind == _LEADER:
+            leading.append(word)
+        elif kind:
+            found.append(word)
+        if word in typos:
+            typo = True
+    for word, kind in extra.items():
+        (leading if kind == _LEADER else found).append(word)
     gate = scanner.unspaced_gate
     gated = gate is not None and letter_gate.search(text) is not None
-    if not gated and (not found or (found.issubset(numbers) and not extra
+    if not gated and (not found or (numbers.issuperset(found) and not extra
                                     and _FREE_NUMBER.search(text) is None)):
-        return hits, leaders  # no time word, and every number is part of a key or a version
+        return hits, leaders, typo  # no time word, and every number is part of a key or a version
     size = len(text)
     for word in found:
         kind = kinds.get(word) or extra[word]
@@ -121,9 +143,6 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
             else:
                 hits.append(at + kind - _DIGIT_AT)  # "q3", "w48"
     if hits or gated:
-        leading = lead.intersection(present)
-        if extra:
-            leading.update(w for w, k in extra.items() if k == _LEADER)
         if leading:
             if gated:
                 low, high = 0, size
@@ -157,7 +176,7 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None) -> tupl
         # there are tried; as a leader it would add no place to try.
         hits.extend(m.end() for m in _GLUED_NUMBER.finditer(text))
         hits = sorted(set(hits))
-    return hits, leaders
+    return hits, leaders, typo
 
 
 # What a word of a question is to the scanner (see _kind); "q3" is _DIGIT_AT + 1.
@@ -185,8 +204,8 @@ def _whole_words(text: str, word: str, low: int, stop: int) -> list[int]:
 
 
 def _state(scanner: Scanner) -> _State:
-    """What the words met so far are to ``scanner``: every word's kind, the words that
-    trigger, the words that lead, the numbers among the triggers, and the gate of letters of the languages without spaces."""
+    """What the words met so far are to ``scanner``: every word's kind, the words that are
+    something (a kind, or a possible typo), the numbers, the possible typos, and the gate of letters of the languages without spaces."""
     found = scanner._cache.get("words")
     if found is None:
         gate = scanner.unspaced_gate
@@ -278,11 +297,12 @@ def _elided_start(text: str, k: int) -> int | None:
 
 def _scan_exact(prepared: Prepared, scanner: Scanner,
                 near: tuple[tuple[int, int], ...] | None = None,
-                present: set[str] | None = None) -> tuple[Candidate, ...]:
+                marks: tuple[list[int], list[int]] | None = None) -> tuple[Candidate, ...]:
     """The exact phrases of a prepared text; with ``near``, only phrases that may cover one of
-    those spans (used after correcting typos: a phrase must hold a corrected word)."""
+    those spans (used after correcting typos: a phrase must hold a corrected word). ``marks``
+    are the text's trigger and leader positions when the caller has them (see _marks)."""
     text = prepared.text
-    hits, leaders = _marks(text, scanner, present)
+    hits, leaders = marks if marks is not None else _marks(text, scanner)[:2]
     if near is not None:
         back = scanner.lookback
         hits = [h for h in hits if any(s - back <= h < e + back for s, e in near)]

@@ -43,8 +43,6 @@ class TypoIndex:
     tails: frozenset[str]  # last three letters
     memo: dict[str, object] = field(default_factory=dict)  # word -> its correction (or None)
     fixable: set[str] = field(default_factory=set)  # the words of memo that have a correction
-    clean_memo: dict[str, bool] = field(default_factory=dict)  # question word -> holds a typo
-    suspect: set[str] = field(default_factory=set)  # the question words that do
 
 
 def _deletions(word: str) -> set[str]:
@@ -149,18 +147,22 @@ def corrections(text: str, index: TypoIndex, taken: list[Span]) -> list[tuple[in
     return out
 
 
-def _clean(words: set[str], index: TypoIndex) -> bool:
-    """Whether none of ``words`` (whole words of a question) holds a misspelt time word."""
-    memo = index.clean_memo
-    for word in words.difference(memo):
-        bad = any(_correction(run, index) is not None for run in _WORD.findall(word))
-        if len(memo) < _MEMO_SIZE:
-            memo[word] = bad
-            if bad:
-                index.suspect.add(word)
-        elif bad:
-            return False
-    return index.suspect.isdisjoint(words)
+def index_of(scanner: "Scanner") -> TypoIndex | None:
+    """The typo index of ``scanner``'s languages (built on first use, kept with the scanner;
+    ``None`` when none of them is written with spaces)."""
+    cache = scanner._cache
+    if "typos" not in cache:
+        cache["typos"] = typo_index(  # type: ignore[assignment]
+            scanner.languages, tuple(scanner.lexicons[lang] for lang in scanner.languages))
+    return cache["typos"]  # type: ignore[return-value]
+
+
+def holds_typo(word: str, index: TypoIndex | None) -> bool:
+    """Whether ``word`` (a whole word of a question, as the scanner splits them) holds a run
+    of letters one edit from a time word. The scanner asks once per word it meets and
+    remembers the answer, so a question holding no such word skips the typo pass at once."""
+    return index is not None and any(_correction(run, index) is not None
+                                     for run in _WORD.findall(word))
 
 
 _UNSEEN = object()
@@ -239,19 +241,11 @@ def mapped(c: Candidate, back: list[int], note: str) -> Candidate:
 
 
 def typo_candidates(prepared: Prepared, scanner: "Scanner", exact: tuple[Candidate, ...],
-                    scan_exact, words: set[str] | None = None
-                    ) -> tuple[Candidate, ...]:  # type: ignore[no-untyped-def]
-    """Phrases found only after correcting misspelt time words. ``words``, the question's
-    words as the scanner splits them, lets a question whose words are all known to hold no
-    misspelling leave at once."""
-    cache = scanner._cache
-    if "typos" not in cache:  # built on first use, kept with the scanner
-        cache["typos"] = typo_index(  # type: ignore[assignment]
-            scanner.languages, tuple(scanner.lexicons[lang] for lang in scanner.languages))
-    index: TypoIndex | None = cache["typos"]  # type: ignore[assignment]
+                    scan_exact) -> tuple[Candidate, ...]:  # type: ignore[no-untyped-def]
+    """Phrases found only after correcting misspelt time words (the caller has seen that a
+    word of the question may be one: see :func:`holds_typo`)."""
+    index = index_of(scanner)
     if index is None:
-        return ()
-    if words is not None and _clean(words, index):
         return ()
     fixes = corrections(prepared.text, index, [c.span for c in exact])
     if not fixes:
