@@ -88,50 +88,40 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None
         present = set(_TOKEN.findall(text))
     cache = scanner._cache
     state = cache.get("words")
-    kinds, notable, numbers, typos, letter_gate = state if state is not None else _state(scanner)
-    new = present.difference(kinds)
-    extra: dict[str, int] = {}  # words met when the memory is full: looked at every time
+    kinds, letter_gate = state if state is not None else _state(scanner)
+    room = len(kinds) < _KINDS_SIZE
     typo = False
-    if new:
-        room = len(kinds) < _KINDS_SIZE
-        index = index_of(scanner)
-        for word in new:
-            kind = _kind(word, scanner)
-            bad = holds_typo(word, index)
+    only_numbers = True
+    found: list[tuple[str, int]] = []  # (word, kind) of the triggers
+    leading: list[str] = []
+    index = None
+    get = kinds.get
+    for word in present:
+        kind = get(word)
+        if kind is None:  # a word met for the first time: what it is, remembered if there is room
+            if index is None:
+                index = index_of(scanner)
+            kind = _kind(word, scanner) | (_TYPO if holds_typo(word, index) else 0)
             if room:
                 kinds[word] = kind
-                if kind or bad:
-                    notable.add(word)
-                if kind == _NUMBER:
-                    numbers.add(word)
-                if bad:
-                    typos.add(word)
+        if kind:
+            if kind & _TYPO:
+                typo = True
+                kind ^= _TYPO
+                if not kind:
+                    continue
+            if kind == _LEADER:
+                leading.append(word)
             else:
-                typo = typo or bad
-                if kind:
-                    extra[word] = kind
-    # The words that are something: triggers, leaders, numbers, words that may be misspelt.
-    seen = notable.intersection(present)
-    found: list[str] = []
-    leading: list[str] = []
-    for word in seen:
-        kind = kinds[word]
-        if kind == _LEADER:
-            leading.append(word)
-        elif kind:
-            found.append(word)
-        if word in typos:
-            typo = True
-    for word, kind in extra.items():
-        (leading if kind == _LEADER else found).append(word)
+                found.append((word, kind))
+                if kind != _NUMBER:
+                    only_numbers = False
     gate = scanner.unspaced_gate
     gated = gate is not None and letter_gate.search(text) is not None
-    if not gated and (not found or (numbers.issuperset(found) and not extra
-                                    and _FREE_NUMBER.search(text) is None)):
+    if not gated and (not found or (only_numbers and _FREE_NUMBER.search(text) is None)):
         return hits, leaders, typo  # no time word, and every number is part of a key or a version
     size = len(text)
-    for word in found:
-        kind = kinds.get(word) or extra[word]
+    for word, kind in found:
         for at in _whole_words(text, word, 0, size):
             if kind == _NUMBER:
                 prev = text[at - 1] if at else " "
@@ -181,8 +171,9 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None
 
 # What a word of a question is to the scanner (see _kind); "q3" is _DIGIT_AT + 1.
 _NOTHING, _TRIGGER, _LEADER, _NUMBER, _DIGIT_AT = 0, 1, 2, 3, 4
+_TYPO = 1 << 20  # added to a word's kind when it may be a misspelt time word
 _KINDS_SIZE = 200_000  # words remembered per scanner (a question log repeats its vocabulary)
-_State = tuple[dict[str, int], set[str], set[str], set[str], re.Pattern[str]]
+_State = tuple[dict[str, int], re.Pattern[str]]
 
 
 def _whole_words(text: str, word: str, low: int, stop: int) -> list[int]:
@@ -228,7 +219,7 @@ def _state(scanner: Scanner) -> _State:
                 latin = latin or (bool(texts) and other * 2 < len(texts))
             # With such a language on, every character that can start a word of theirs counts.
             letters = re.compile(re.sub(r"[0-9]", "", gate.pattern)) if latin else _OTHER_SCRIPT
-        found = ({}, set(), set(), set(), letters)
+        found = ({}, letters)
         scanner._cache["words"] = found  # type: ignore[assignment]
     return found  # type: ignore[return-value]
 
@@ -345,7 +336,7 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
     limit = 0
     pair = _PAIR.match
     # The forms of languages without spaces are tried only where _marks looks for them.
-    unspaced = scanner.unspaced and _state(scanner)[4].search(text) is not None
+    unspaced = scanner.unspaced and _state(scanner)[1].search(text) is not None
     starts = scanner._cache.get("starts")
     if starts is None:
         starts = scanner._cache["starts"] = {}  # type: ignore[assignment]
