@@ -51,6 +51,22 @@ class Prepared:
         return o[start], (o[end - 1] + 1 if end > start else o[start])
 
 
+_new = object.__new__
+_set_original = Prepared.original.__set__  # type: ignore[attr-defined]  # the slots' setters
+_set_text = Prepared.text.__set__  # type: ignore[attr-defined]
+_set_offsets = Prepared.offsets.__set__  # type: ignore[attr-defined]
+
+
+def _prepared(original: str, text: str, offsets: tuple[int, ...] | None) -> Prepared:
+    """``Prepared(original, text, offsets)`` at half the cost: the frozen dataclass's own
+    ``__init__`` goes through ``object.__setattr__`` for each field (every question pays it)."""
+    obj = _new(Prepared)
+    _set_original(obj, original)
+    _set_text(obj, text)
+    _set_offsets(obj, offsets)
+    return obj
+
+
 def prepare(text: str) -> Prepared:
     """Normalize ``text`` for scanning.
 
@@ -69,7 +85,7 @@ def prepare(text: str) -> Prepared:
         folded = text.lower()
         if "\t" in folded or "\n" in folded or "\r" in folded:
             folded = folded.translate(_TRANSLATE)
-        return Prepared(text, folded, None)
+        return _prepared(text, folded, None)
     original = text
     if _DOTTED_CAPITAL_I in text:
         text = text.replace(_DOTTED_CAPITAL_I, "I")
@@ -78,7 +94,7 @@ def prepare(text: str) -> Prepared:
         if len(folded) == len(text):
             if _UNIFIED.search(folded) is not None:  # translate() is slow on non-ASCII text
                 folded = folded.translate(_TRANSLATE)
-            return Prepared(original, folded, None)
+            return _prepared(original, folded, None)
     pieces: list[str] = []
     offsets: list[int] = []
     for index, ch in enumerate(text):

@@ -62,8 +62,8 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
     text = prepared.text
     # ASCII text needs no class of every script's letters and marks: the same words, sooner.
     present = set((_ASCII_TOKEN if text.isascii() else _TOKEN).findall(text))
-    hits, leaders, typo = _marks(text, scanner, present)
-    exact = _scan_exact(prepared, scanner, None, (hits, leaders))
+    hits, leaders, typo, lettered = _marks(text, scanner, present)
+    exact = _scan_exact(prepared, scanner, None, (hits, leaders, lettered))
     if not typo:
         return exact  # no word of the question is one edit from a time word
     fuzzy = typo_candidates(prepared, scanner, exact, _scan_exact)
@@ -73,11 +73,12 @@ def scan_text(prepared: Prepared, scanner: Scanner) -> tuple[Candidate, ...]:
 
 
 def _marks(text: str, scanner: Scanner, present: set[str] | None = None
-           ) -> tuple[list[int], list[int], bool]:
+           ) -> tuple[list[int], list[int], bool, bool]:
     """Positions of trigger words and of leading words, in one pass over the words of
     ``text`` (set lookups: no expression over every word of every language to compile), plus
     the expression of the languages written without spaces; and whether a word may be a
-    misspelt time word (see :func:`typos.holds_typo`).
+    misspelt time word (see :func:`typos.holds_typo`); and whether the text holds a letter
+    of the languages written without spaces (see _state).
 
     What each word is (trigger, leader, number, nothing; misspelt or not) is remembered per
     scanner, so a question whose words are all known to be nothing leaves after two set
@@ -117,9 +118,10 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None
                 if kind != _NUMBER:
                     only_numbers = False
     gate = scanner.unspaced_gate
-    gated = gate is not None and letter_gate.search(text) is not None
+    lettered = letter_gate.search(text) is not None  # _NEVER when no language lacks spaces
+    gated = gate is not None and lettered
     if not gated and (not found or (only_numbers and _FREE_NUMBER.search(text) is None)):
-        return hits, leaders, typo  # no time word, and every number is part of a key or a version
+        return hits, leaders, typo, lettered  # no time word, and every number is part of a key or a version
     size = len(text)
     for word, kind in found:
         for at in _whole_words(text, word, 0, size):
@@ -166,7 +168,7 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None
         # there are tried; as a leader it would add no place to try.
         hits.extend(m.end() for m in _GLUED_NUMBER.finditer(text))
         hits = sorted(set(hits))
-    return hits, leaders, typo
+    return hits, leaders, typo, lettered
 
 
 # What a word of a question is to the scanner (see _kind); "q3" is _DIGIT_AT + 1.
@@ -288,12 +290,15 @@ def _elided_start(text: str, k: int) -> int | None:
 
 def _scan_exact(prepared: Prepared, scanner: Scanner,
                 near: tuple[tuple[int, int], ...] | None = None,
-                marks: tuple[list[int], list[int]] | None = None) -> tuple[Candidate, ...]:
+                marks: tuple[list[int], list[int], bool] | None = None) -> tuple[Candidate, ...]:
     """The exact phrases of a prepared text; with ``near``, only phrases that may cover one of
     those spans (used after correcting typos: a phrase must hold a corrected word). ``marks``
     are the text's trigger and leader positions when the caller has them (see _marks)."""
     text = prepared.text
-    hits, leaders = marks if marks is not None else _marks(text, scanner)[:2]
+    if marks is None:
+        hits, leaders, _, lettered = _marks(text, scanner)
+    else:
+        hits, leaders, lettered = marks
     if near is not None:
         back = scanner.lookback
         hits = [h for h in hits if any(s - back <= h < e + back for s, e in near)]
@@ -336,7 +341,7 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
     limit = 0
     pair = _PAIR.match
     # The forms of languages without spaces are tried only where _marks looks for them.
-    unspaced = scanner.unspaced and _state(scanner)[1].search(text) is not None
+    unspaced = scanner.unspaced and lettered
     starts = scanner._cache.get("starts")
     if starts is None:
         starts = scanner._cache["starts"] = {}  # type: ignore[assignment]
