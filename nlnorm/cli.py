@@ -100,8 +100,11 @@ def _parser() -> argparse.ArgumentParser:
                     help="English questions given to search_dates (default 2000; it is slow)")
     be.add_argument("--mixed", action=argparse.BooleanOptionalAction, default=True,
                     help="also run the mixed log in every deep language")
-    be.add_argument("--mixed-sample", type=int, default=300,
-                    help="mixed questions given to search_dates with every language (default 300)")
+    be.add_argument("--mixed-sample", type=int, default=500,
+                    help="mixed questions given to search_dates with every language (default 500)")
+    be.add_argument("--rounds", type=int, default=3,
+                    help="rounds of the side-by-side comparison, alternating the two on the same "
+                         "questions (default 3)")
     sub.add_parser("schema", help="print the JSON Schema of the output")
     return p
 
@@ -191,7 +194,7 @@ def main(argv: Sequence[str] | None = None) -> int:
             from .bench import run
 
             return run(n=args.n, compare=args.compare, compare_sample=args.compare_sample,
-                       mixed=args.mixed, mixed_sample=args.mixed_sample)
+                       mixed=args.mixed, mixed_sample=args.mixed_sample, rounds=args.rounds)
         if args.command == "schema":
             from .schema import Result
 

@@ -22,6 +22,9 @@ def test_bench_prints_every_figure_and_a_json_summary():
         assert label in text
     summary = json.loads(text.split("json: ", 1)[1])
     assert summary["english"]["nlnorm"]["n"] == 300 and summary["english"]["ratio_median"] > 0
+    # Three alternating rounds over the 40 compared questions: 120 timings on each side.
+    assert summary["english"]["search_dates"]["n"] == 120
+    assert "times" not in summary["english"]["nlnorm"]
 
 
 def test_the_benchmark_log_is_mostly_questions_without_time_phrases():
