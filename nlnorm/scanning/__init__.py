@@ -149,11 +149,12 @@ def _marks(text: str, scanner: Scanner, present: set[str] | None = None
         # Languages without spaces: the (large) expression runs only where a character that
         # can start one of their words stands; a question in another script skips it.
         marks = scanner.unspaced_marks.match
+        heads = scanner.unspaced_heads
         end = -1
         for g in gate.finditer(text):  # type: ignore[union-attr]
             at = g.start()
-            if at < end:
-                continue
+            if at < end or (text[at:at + 2] not in heads and text[at] not in heads):
+                continue  # inside the last word found, or no word starts with these two
             m = marks(text, at)
             if m is not None and m.end() > at:
                 (hits if m.lastgroup == "t" else leaders).append(at)
@@ -355,20 +356,20 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
             at_word = True
         ch = text[pos]
         with_chars = unspaced and not (ch.isdigit() and _LATIN_AFTER_NUMBER.match(text, pos))
-        first = second = ""
-        if at_word:
-            m0 = pair(text, pos)
+        m0 = pair(text, pos) if at_word else None
+        # The buckets tried at a place depend only on its first two runs (the text of the
+        # match m0) and where it stands: looked up once per such start, not key by key.
+        start_key = (m0.group() if m0 is not None else "") + \
+            ("\x01" if at_word else "\x00") + (ch if with_chars else "")
+        tried = starts.get(start_key)
+        if tried is None:
+            first = second = ""
             if m0 is not None:
                 first, second = m0.groups("")
                 if first[0].isdigit():
                     first = _DIGIT_KEYS[min(len(first), 4)]
                 if second and second[0].isdigit():
                     second = _DIGIT_KEYS[min(len(second), 4)]
-        # The buckets tried at a place depend only on its first two runs and where it stands:
-        # looked up once per such start, not key by key.
-        start_key = (first, second, at_word, with_chars and ch)
-        tried = starts.get(start_key)
-        if tried is None:
             tried = _buckets_at(scanner, first, second, at_word, ch if with_chars else "")
             if len(starts) < _STARTS_SIZE:
                 starts[start_key] = tried

@@ -162,6 +162,10 @@ class Scanner:
     unspaced: bool = False  # some language is written without spaces: try per-character buckets
     lookback: int = 48  # characters before a trigger in which leading words are tried
     marks: tuple[tuple[str, re.Pattern[str]], ...] = ()  # (language, its marks): see Meta.marks
+    #: The first two characters of the words of ``unspaced_marks`` (the first one alone when
+    #: the word is one character, or its second is a space): a place whose first two or first
+    #: character are not among them starts none of them.
+    unspaced_heads: frozenset[str] = frozenset()
 
     @property
     def forms(self) -> tuple[Form, ...]:
@@ -770,6 +774,9 @@ def _scanner(languages: tuple[str, ...]) -> Scanner:
         endings=tuple(sorted(endings, key=len, reverse=True)),
         unspaced_marks=marks,  # type: ignore[arg-type]
         unspaced_gate=_gate(unspaced + unspaced_leaders) if marks is not None else None,
+        # A space in a word matches any white space: such a word is filed by its first character.
+        unspaced_heads=frozenset(w[:1] if w[1:2].isspace() else w[:2]
+                                 for w in unspaced + unspaced_leaders if w),
         glued_triggers=GluedWords(frozenset(glued_words), frozenset(endings)),  # type: ignore[arg-type]
         not_temporal=frozenset(w for lex in lexicons.values() for w in lex.not_temporal),
         curated=MappingProxyType({k: tuple(v) for k, v in curated.items()}),
