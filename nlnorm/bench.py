@@ -186,7 +186,7 @@ def _section(title: str, questions: Sequence[str], ctx: Any, dp_languages: list[
 
 def run(n: int = 10_000, compare: bool = True, compare_sample: int = 2_000,
         out: Any = None, startup_runs: int = 7, mixed: bool = True,
-        mixed_sample: int = 500, rounds: int = 3) -> int:
+        mixed_sample: int = 1000, rounds: int = 3) -> int:
     """Run the benchmark and print its figures; returns a process exit code."""
     out = out or sys.stdout
     from .benchlog import generate

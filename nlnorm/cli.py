@@ -100,8 +100,8 @@ def _parser() -> argparse.ArgumentParser:
                     help="English questions given to search_dates (default 2000; it is slow)")
     be.add_argument("--mixed", action=argparse.BooleanOptionalAction, default=True,
                     help="also run the mixed log in every deep language")
-    be.add_argument("--mixed-sample", type=int, default=500,
-                    help="mixed questions given to search_dates with every language (default 500)")
+    be.add_argument("--mixed-sample", type=int, default=1000,
+                    help="mixed questions given to search_dates with every language (default 1000)")
     be.add_argument("--rounds", type=int, default=3,
                     help="rounds of the side-by-side comparison, alternating the two on the same "
                          "questions (default 3)")
