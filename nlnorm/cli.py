@@ -65,6 +65,80 @@ def _context_options(p: argparse.ArgumentParser, demo: bool = False) -> None:
                    "the weekend comes from the locale's CLDR data")
 
 
+def _sql_options(p: argparse.ArgumentParser) -> None:
+    g = p.add_argument_group("SQL predicates (docs/sql.md)")
+    g.add_argument("--sql-column", metavar="NAME",
+                   help="give every period mention a field 'sql': its predicate over this column "
+                   "(e.g. created_at or issues.created_at)")
+    g.add_argument("--dialect", metavar="D",
+                   help="SQL dialect, sqlglot's name: sqlite, duckdb, postgres, mysql, tsql, "
+                   "bigquery, spark, snowflake (needed with --sql-column)")
+    g.add_argument("--paramstyle", choices=("qmark", "numeric", "named", "format", "pyformat"),
+                   help="placeholders as the DB-API driver wants them (default: the dialect's "
+                   "usual driver's)")
+    g.add_argument("--column-kind", choices=("date", "local", "utc", "instant"), default="instant",
+                   help="how the column stores time: a date; a wall-clock timestamp in --column-zone; "
+                   "a timestamp holding UTC; an aware instant such as timestamptz (default)")
+    g.add_argument("--column-zone", metavar="ZONE",
+                   help="the zone of a 'local' column's wall clock (default: --tz)")
+    g.add_argument("--sqlite-encoding", choices=("text", "text-t", "unix", "julian"),
+                   help="how a SQLite column writes time (default: text, unix for instants)")
+    g.add_argument("--sprint-key", metavar="COLUMN",
+                   help="select a sprint mention's rows by this key column (IN the sprints' ids "
+                   "from --sprints) instead of by dates")
+    g.add_argument("--literal", action="store_true",
+                   help="write the values into 'where' (typed literals) instead of placeholders")
+
+
+def _sql_adder(args: argparse.Namespace, ctx: Any) -> Any:
+    """A function adding the ``sql`` field to a result's period mentions, or ``None`` when no
+    SQL was asked for."""
+    given = [f for f in ("dialect", "paramstyle", "column_zone", "sqlite_encoding", "sprint_key")
+             if getattr(args, f, None) is not None] + (["literal"] if getattr(args, "literal", False) else [])
+    if args.sql_column is None:
+        if given:
+            from .errors import InputError
+
+            flags = ", ".join("--" + f.replace("_", "-") for f in given)
+            raise InputError(f"{flags}: used only with --sql-column NAME (the column to write "
+                             "predicates over)")
+        return None
+    from .errors import InputError
+    from .schema import SqlPredicate
+    from .sql import Column, dialect, predicate
+
+    if args.dialect is None:
+        raise InputError("--sql-column needs --dialect: one of sqlite, duckdb, postgres, mysql, "
+                         "tsql, bigquery, spark, snowflake")
+    d = dialect(args.dialect)
+    if args.sqlite_encoding is not None and d.name != "sqlite":
+        raise InputError(f"--sqlite-encoding is for --dialect sqlite, not {d.name}")
+    if args.sprint_key is not None and ctx.sprints is None:
+        raise InputError("--sprint-key needs --sprints FILE (the table holding the sprints' ids)")
+    column = Column(args.sql_column, args.column_kind, zone=args.column_zone,
+                    encoding=args.sqlite_encoding)
+    # Checked now, so a bad column name is one error, not one per line.
+    from .sql import quoted_name
+
+    quoted_name(column.name, d.name)
+    style = "literal" if args.literal else "params"
+
+    def add(result: Any) -> Any:
+        if result.error or not result.mentions:
+            return result
+        changed = []
+        for number, m in enumerate(result.mentions, start=1):
+            frag = predicate(m, column, d.name, tz=result.reference.tz, slot=f"t{number}",
+                             style=style, paramstyle=args.paramstyle, sprint_key=args.sprint_key,
+                             sprints=ctx.sprints, team=ctx.team)
+            if frag is not None:
+                m = m.model_copy(update={"sql": SqlPredicate(**frag.as_json())})
+            changed.append(m)
+        return result.model_copy(update={"mentions": tuple(changed)})
+
+    return add
+
+
 class _Parser(argparse.ArgumentParser):
     """argparse with one-line errors: ``nlnorm: error: <what was wrong>; see <prog> --help``."""
 
@@ -82,12 +156,14 @@ def _parser() -> argparse.ArgumentParser:
     n.add_argument("text", help="the question")
     n.add_argument("--indent", type=int, default=2, help="JSON indent (0: one line)")
     _context_options(n)
+    _sql_options(n)
     b = sub.add_parser("batch", help="normalize a JSONL file: one output line per input line")
     b.add_argument("input", nargs="?", default="-", help="input JSONL (default: stdin)")
     b.add_argument("-o", "--output", default="-", help="output JSONL (default: stdout)")
     b.add_argument("--progress", action=argparse.BooleanOptionalAction, default=None,
                    help="show a progress bar (default: when stderr is a terminal)")
     _context_options(b)
+    _sql_options(b)
     d = sub.add_parser("demo", help="normalize the bundled question log of the demo team and show it")
     d.add_argument("input", nargs="?", help="a JSONL log (default: examples/demo/questions.jsonl)")
     d.add_argument("--json", action="store_true", help="print JSONL instead of a table")
@@ -240,8 +316,11 @@ def _normalize(args: argparse.Namespace) -> int:
     if not _is_text(args.text):
         raise InputError("the question is not valid UTF-8 text")
     ctx = _context(args)
+    add_sql = _sql_adder(args, ctx)
     _utf8(sys.stdout)
     result = normalize(args.text, ctx)
+    if add_sql is not None:
+        result = add_sql(result)
     indent = args.indent or None
     print(result.model_dump_json(indent=indent))
     return 0
@@ -263,6 +342,7 @@ def _open_out(name: str) -> IO[str]:
 
 def _batch(args: argparse.Namespace) -> int:
     ctx = _context(args)
+    add_sql = _sql_adder(args, ctx)
     source = _open_in(args.input)
     sink = _open_out(args.output)
     show = args.progress if args.progress is not None else sys.stderr.isatty()
@@ -272,7 +352,8 @@ def _batch(args: argparse.Namespace) -> int:
             total = sum(1 for _ in fh)
     started = time.perf_counter()
     try:
-        lines, mentions, errors = run_batch(source, sink, ctx, progress=show, total=total)
+        lines, mentions, errors = run_batch(source, sink, ctx, progress=show, total=total,
+                                            add_sql=add_sql)
     finally:
         if source is not sys.stdin:
             source.close()
@@ -285,13 +366,14 @@ def _batch(args: argparse.Namespace) -> int:
 
 
 def run_batch(source: IO[str], sink: IO[str], ctx: Any, progress: bool = False,
-              total: int | None = None) -> tuple[int, int, int]:
+              total: int | None = None, add_sql: Any = None) -> tuple[int, int, int]:
     """Normalize each JSONL line of ``source`` into ``sink``; returns (lines, mentions, errors).
 
     Exactly one output line per input line, in order; a bad line gets its error and the rest
     go on. A byte order mark at the start of a line is ignored (RFC 8259, section 8.1). The
     progress bar, if any, goes to stderr.
     """
+    from .errors import NlnormError
     from .pipeline import json_kind, normalize_item
     from .schema import Result
 
@@ -313,6 +395,11 @@ def run_batch(source: IO[str], sink: IO[str], ctx: Any, progress: bool = False,
             lines += 1
             raw = line.rstrip("\r\n").removeprefix("\ufeff")
             result = _batch_line(number, raw, ctx, cache, normalize_item, json_kind, Result)
+            if add_sql is not None:
+                try:
+                    result = add_sql(result)
+                except NlnormError as exc:  # this line's SQL only: the rest go on
+                    result = result.model_copy(update={"error": f"line {number}: {exc}"})
             if result.error:
                 errors += 1
             mentions += len(result.mentions)

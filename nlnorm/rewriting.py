@@ -140,6 +140,7 @@ def annotate(prepared: Prepared, resolved: tuple[Resolved, ...], ctx: "Context",
                 confidence=r.candidate.confidence,
                 alternatives=tuple(_alternative(a) for a in r.alternatives),
                 sprints=r.chosen.sprints,
+                sql=None,
             )
         )
         name = f"t{index}"

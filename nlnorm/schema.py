@@ -37,6 +37,18 @@ class Alternative(_Out):
                                      "(sprint readings only), by name")
 
 
+class SqlPredicate(_Out):
+    """A mention's period as a SQL predicate (when one was asked for: ``--sql-column``)."""
+
+    dialect: str = Field(description="sqlglot's name of the dialect the predicate is written in")
+    where: str = Field(description="the predicate: column >= start AND column < end (an open "
+                       "side left out); 1 = 1 when both sides are open")
+    params: list[Any] | dict[str, Any] = Field(
+        description="the bound values in placeholder order (qmark, numeric, format) or by name "
+        "(named, pyformat), as ISO 8601 text (numbers for SQLite's unix and julian columns); "
+        "empty when the values are written into 'where' (--literal)")
+
+
 class Mention(_Out):
     """One phrase of the question with the explicit value it stands for."""
 
@@ -61,6 +73,10 @@ class Mention(_Out):
     )
     sprints: tuple[str, ...] = Field(default=(), description="kind 'sprint': the names of the "
                                      "sprints the interval covers, from the sprint table")
+    sql: SqlPredicate | None = Field(
+        None, exclude_if=lambda v: v is None,
+        description="the period as a SQL predicate, present only when one was asked for "
+        "(--sql-column); left out for a mention that is no period (an instant, a duration)")
 
 
 class Slot(_Out):
