@@ -219,6 +219,10 @@ def run(n: int = 10_000, compare: bool = True, compare_sample: int = 2_000,
     if mixed:
         print(f"  peak RSS, mixed log, every deep language {summary['rss_deep_mb']:7.1f} MB", file=out)
         print(f"  peak RSS, + every CLDR locale       {summary['rss_every_locale_mb']:7.1f} MB", file=out)
+    summary["sql"] = sql_timing(generate(n, seed=0), english)
+    print(f"  SQL predicate of one mention      {summary['sql']['median_us']:7.1f} us median, "
+          f"{summary['sql']['p99_us']:.1f} us p99 ({summary['sql']['n']:.0f} predicates: 8 "
+          "dialects x 4 column kinds x params/literal)", file=out)
     summary["cli_startup_en_ms"] = cli_startup(startup_runs, "en")
     print(f"  CLI start-up, one question, --lang en  {summary['cli_startup_en_ms']:7.1f} ms "
           f"(median of {startup_runs})", file=out)
@@ -229,6 +233,36 @@ def run(n: int = 10_000, compare: bool = True, compare_sample: int = 2_000,
     print("", file=out)
     print("json: " + json.dumps(summary, sort_keys=True), file=out)
     return 0
+
+
+def sql_timing(questions: Sequence[str], ctx: Any, limit: int = 300) -> dict[str, float]:
+    """Median and p99 µs to write one period mention's SQL predicate (``nlnorm.sql.predicate``),
+    over the first ``limit`` period mentions of ``questions``, in every dialect, column kind and
+    style (params, literal)."""
+    from .pipeline import normalize
+    from .sql import DIALECTS, Column, predicate
+
+    mentions = []
+    for q in questions:
+        mentions.extend(m for m in normalize(q, ctx).mentions if m.kind in ("range", "sprint"))
+        if len(mentions) >= limit:
+            break
+    kinds = ("date", "local", "utc", "instant")
+    times: list[float] = []
+    clock = time.perf_counter_ns
+    tz = ctx.tz
+    for name in DIALECTS:
+        for kind in kinds:
+            column = Column("created_at", kind)  # type: ignore[arg-type]
+            for style in ("params", "literal"):
+                predicate(mentions[0], column, name, tz=tz, style=style)  # warm: quoting cache
+                for m in mentions:
+                    t0 = clock()
+                    predicate(m, column, name, tz=tz, style=style)  # type: ignore[arg-type]
+                    times.append((clock() - t0) / 1000)
+    times.sort()
+    return {"median_us": statistics.median(times), "p99_us": _percentile(times, 0.99),
+            "n": float(len(times))}
 
 
 def load_every_locale() -> None:

@@ -18,13 +18,14 @@ def test_bench_prints_every_figure_and_a_json_summary():
     assert run(n=300, compare=True, compare_sample=40, out=out, startup_runs=1, mixed=False) == 0
     text = out.getvalue()
     for label in ("median per question", "p99 per question", "questions per second",
-                  "peak RSS", "CLI start-up", "search_dates", "ratio"):
+                  "peak RSS", "CLI start-up", "search_dates", "ratio", "SQL predicate"):
         assert label in text
     summary = json.loads(text.split("json: ", 1)[1])
     assert summary["english"]["nlnorm"]["n"] == 300 and summary["english"]["ratio_median"] > 0
     # Three alternating rounds over the 40 compared questions: 120 timings on each side.
     assert summary["english"]["search_dates"]["n"] == 120
     assert "times" not in summary["english"]["nlnorm"]
+    assert summary["sql"]["n"] > 0 and summary["sql"]["median_us"] > 0
 
 
 def test_the_benchmark_log_is_mostly_questions_without_time_phrases():
