@@ -111,17 +111,21 @@ def bound_value(moment: datetime, side: str, column: Column, dialect_name: str,
         delta = utc - _EPOCH
         ms_exact = delta.days * 86_400_000_000 + delta.seconds * 1_000_000 + delta.microseconds
         if column.sqlite_encoding() == "julian":
-            # SQLite keeps julian days as whole milliseconds divided by 86,400,000.0.
-            return (ms_exact // 1000 + _JULIAN_MS_AT_EPOCH) / 86_400_000.0
+            # SQLite keeps julian days as whole milliseconds divided by 86,400,000.0; a row at
+            # whole millisecond m is at or after the bound exactly when m is at or after the
+            # bound rounded up to a whole millisecond (rounding down would let in the row just
+            # before a bound with a fraction of a millisecond).
+            return (-(-ms_exact // 1000) + _JULIAN_MS_AT_EPOCH) / 86_400_000.0
         return ms_exact // 1_000_000 if ms_exact % 1_000_000 == 0 else ms_exact / 1_000_000
     return utc
 
 
 def _text(wall: datetime, encoding: str) -> str:
     """A wall time as SQLite text, at the shortest precision that is exact (date, minutes,
-    seconds, microseconds): a shorter string sorts before every longer one it starts, so
-    '2026-03-01' <= '2026-03-01 00:00:00' and rows written with or without seconds compare
-    right against it."""
+    seconds, a fraction of a second without trailing zeros): a shorter string sorts before
+    every longer one it starts, so '2026-03-01' <= '2026-03-01 00:00:00' and
+    '...:30.5' <= '...:30.500', and rows written with or without seconds or with any number
+    of fraction digits compare right against it."""
     if wall.time() == time(0):
         return wall.date().isoformat()
     sep = "T" if encoding == "text-t" else " "
@@ -129,5 +133,5 @@ def _text(wall: datetime, encoding: str) -> str:
     if wall.second or wall.microsecond:
         out += f":{wall.second:02d}"
     if wall.microsecond:
-        out += f".{wall.microsecond:06d}"
+        out += f".{wall.microsecond:06d}".rstrip("0")
     return out
