@@ -9,7 +9,10 @@ themselves (``tests/sql/test_engines.py``).
 from __future__ import annotations
 
 import functools
+import json
 import re
+import unicodedata
+from importlib import resources
 from dataclasses import dataclass
 
 from .errors import SqlError
@@ -91,10 +94,23 @@ def dialect(name: str) -> Dialect:
     return found
 
 
-# A plain name part: letters, digits and "_" of any script, not starting with a digit.
-_PART = re.compile(r"[^\W\d]\w*")
+# A plain name part, as SQL:2016 defines an identifier (5.2 <identifier start> and <identifier
+# extend>) but stricter: it starts with a letter or "_" and goes on with letters, combining marks
+# (Mn, Mc: the vowel signs of Devanagari, say), decimal digits and "_". No format character
+# (Cf: zero-width and direction marks), no other connector, and no letter of the Spacing Modifier
+# Letters block (U+02B0-U+02FF), whose members look like quotes and primes (U+02BC, U+02B9).
 _ASCII_PART = re.compile(r"[A-Za-z_][A-Za-z0-9_]*")
 _MAX_PART = 128
+_EXTEND = frozenset({"Lu", "Ll", "Lt", "Lm", "Lo", "Mn", "Mc", "Nd"})
+
+
+def _plain_part(part: str) -> bool:
+    if _ASCII_PART.fullmatch(part):
+        return True
+    if not part or not (part[0] == "_" or unicodedata.category(part[0])[0] == "L"):
+        return False
+    return all(c == "_" or (unicodedata.category(c) in _EXTEND and not "\u02b0" <= c <= "\u02ff")
+               for c in part)
 
 
 @functools.lru_cache(maxsize=1024)
@@ -112,7 +128,7 @@ def quoted_name(name: str, dialect_name: str) -> str:
                        "'issues.created_at'")
     parts = name.split(".")
     for part in parts:
-        if len(part) > _MAX_PART or not _PART.fullmatch(part):
+        if len(part) > _MAX_PART or not _plain_part(part):
             raise SqlError(
                 f"column={name!r} is not a plain column name: each dot-separated part must be "
                 "letters, digits and '_' (not starting with a digit); quotes, spaces, ';', "
@@ -122,18 +138,48 @@ def quoted_name(name: str, dialect_name: str) -> str:
 
 def _quote_part(part: str, dialect_name: str) -> str:
     from sqlglot import exp
-    from sqlglot.dialects.dialect import Dialect as GlotDialect
 
-    keywords = GlotDialect.get_or_raise(dialect_name).tokenizer_class.KEYWORDS
-    if _ASCII_PART.fullmatch(part) and part.upper() not in keywords and part.upper() not in _RESERVED:
+    if _ASCII_PART.fullmatch(part) and not _must_quote(part.upper(), dialect_name):
         return part
     return exp.to_identifier(part, quoted=True).sql(dialect=dialect_name)
 
 
-#: SQL:2016 reserved words that some dialects' tokenizers do not list but their parsers reject
-#: as bare names (common practice: quote them everywhere).
-_RESERVED = frozenset("""ALL AND ANY AS ASC BETWEEN BY CASE CAST CHECK COLUMN CREATE CROSS CURRENT_DATE
-CURRENT_TIME CURRENT_TIMESTAMP DEFAULT DELETE DESC DISTINCT DROP ELSE END EXCEPT EXISTS FALSE FETCH
-FOR FOREIGN FROM FULL GRANT GROUP HAVING IN INNER INSERT INTERSECT INTERVAL INTO IS JOIN LEFT LIKE
-LIMIT NATURAL NOT NULL OFFSET ON OR ORDER OUTER PRIMARY REFERENCES RIGHT SELECT SET SOME TABLE THEN
-TO TRUE UNION UNIQUE UPDATE USER USING VALUES WHEN WHERE WINDOW WITH""".split())
+@functools.lru_cache(maxsize=None)
+def _reserved(dialect_name: str) -> frozenset[str]:
+    """The words the dialect's engine refuses as a bare column name (reserved_words.json says
+    where each list comes from)."""
+    text = resources.files(__package__).joinpath("reserved_words.json").read_text("utf-8")
+    data = json.loads(text)
+    words = set(data[dialect_name].split())
+    if dialect_name not in ("postgres", "snowflake"):  # exact lists; quoting there is case-sensitive
+        words |= set(data["sql2016"].split())
+    return frozenset(words)
+
+
+@functools.lru_cache(maxsize=4096)
+def _must_quote(word: str, dialect_name: str) -> bool:
+    if word in _reserved(dialect_name):
+        return True
+    from sqlglot.dialects.dialect import Dialect as GlotDialect
+
+    if word not in GlotDialect.get_or_raise(dialect_name).tokenizer_class.KEYWORDS:
+        return False
+    return not _reads_as_bare_column(word, dialect_name)
+
+
+def _reads_as_bare_column(word: str, dialect_name: str) -> bool:
+    """Whether sqlglot reads ``word`` bare as a column on both sides of a comparison."""
+    import sqlglot
+    from sqlglot import exp
+
+    try:
+        tree = sqlglot.parse_one(f"SELECT 1 FROM t WHERE {word} >= 1 AND {word} < 2",
+                                 read=dialect_name)
+    except sqlglot.errors.SqlglotError:
+        return False
+    where = tree.args.get("where")
+    if where is None or not isinstance(where.this, exp.And):
+        return False
+    sides = (where.this.left, where.this.right)
+    return all(isinstance(c, (exp.GTE, exp.LT)) and isinstance(c.left, exp.Column)
+               and c.left.name.upper() == word and not c.left.table for c in sides)
