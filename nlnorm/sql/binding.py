@@ -142,7 +142,8 @@ def _bind_code(code: str, slots: dict[str, Any], dialect_name: str, ps: str, par
                          paramstyle=ps, sprint_key=sprint_key, sprints=sprints, team=team,
                          first_index=params.index)
         if frag is None:
-            raise SqlError(f"{{{slot}}} is {mention.text!r}, a {mention.kind}, not a period: "
+            article = "an" if mention.kind[:1] in "aeiou" else "a"
+            raise SqlError(f"{{{slot}}} is {mention.text!r}, {article} {mention.kind}, not a period: "
                            "there is no predicate to write for it")
         values = frag.params.values() if isinstance(frag.params, dict) else frag.params
         names = list(frag.params) if isinstance(frag.params, dict) else [None] * len(values)
