@@ -552,6 +552,13 @@ def _day_case(question: str, tz: str, now: str) -> Any:
     return normalize(question, Context.at(now, tz=tz)).mentions[0]
 
 
+def assert_every_kind_selects(table: Table, mention: Any, zone: str, want: set[int]) -> None:
+    """The instant, local and date columns of ``table`` all select exactly ``want``."""
+    for column in (instant_column(table), local_column(table, zone), date_column(zone)):
+        assert restricted(selected(table, mention, column, zone), table) \
+            == {frozenset(want)}, (mention.text, column)
+
+
 @pytest.mark.parametrize("engine", ENGINES)
 def test_a_spring_forward_day_has_23_hours(engine: str, request: pytest.FixtureRequest) -> None:
     """29 March 2026 in Europe/Berlin (02:00 becomes 03:00) lasts 23 hours: the day runs from
@@ -566,10 +573,7 @@ def test_a_spring_forward_day_has_23_hours(engine: str, request: pytest.FixtureR
     assert end - start == timedelta(hours=23)
     want = on_day(table, "Europe/Berlin", date(2026, 3, 29))
     assert len(want) > 10  # rows around the 02:00 transition and both midnights
-    for column in (instant_column(table), local_column(table, "Europe/Berlin"),
-                   date_column("Europe/Berlin")):
-        assert restricted(selected(table, mention, column, "Europe/Berlin"), table) \
-            == {frozenset(want)}, column
+    assert_every_kind_selects(table, mention, "Europe/Berlin", want)
 
 
 @pytest.mark.parametrize("engine", ENGINES)
@@ -588,10 +592,7 @@ def test_a_fall_back_day_has_25_hours(engine: str, request: pytest.FixtureReques
     repeated = datetime(2026, 10, 25, 1, 0, tzinfo=UTC)  # 03:00 CEST becomes 02:00 CET
     assert keys_between(table, repeated - timedelta(hours=1),
                         repeated + timedelta(hours=1)) <= want
-    for column in (instant_column(table), local_column(table, "Europe/Berlin"),
-                   date_column("Europe/Berlin")):
-        assert restricted(selected(table, mention, column, "Europe/Berlin"), table) \
-            == {frozenset(want)}, column
+    assert_every_kind_selects(table, mention, "Europe/Berlin", want)
 
 
 @pytest.mark.parametrize("engine", ENGINES)
@@ -612,10 +613,7 @@ def test_santiago_day_without_a_midnight(engine: str, request: pytest.FixtureReq
     for mention, which in ((day, date(2026, 9, 6)), (before, date(2026, 9, 5))):
         want = on_day(table, zone, which)
         assert len(want) > 5
-        for column in (instant_column(table), local_column(table, zone),
-                       date_column(zone)):
-            assert restricted(selected(table, mention, column, zone), table) \
-                == {frozenset(want)}, (which, column)
+        assert_every_kind_selects(table, mention, zone, want)
 
 
 # --- SQLite bounds with a fraction of a second ------------------------------------------------
