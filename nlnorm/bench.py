@@ -242,7 +242,7 @@ def sql_timing(questions: Sequence[str], ctx: Any, limit: int = 300) -> dict[str
     from .pipeline import normalize
     from .sql import DIALECTS, Column, predicate
 
-    mentions = []
+    mentions: list[Any] = []
     for q in questions:
         mentions.extend(m for m in normalize(q, ctx).mentions if m.kind in ("range", "sprint"))
         if len(mentions) >= limit:
@@ -258,7 +258,7 @@ def sql_timing(questions: Sequence[str], ctx: Any, limit: int = 300) -> dict[str
                 predicate(mentions[0], column, name, tz=tz, style=style)  # warm: quoting cache
                 for m in mentions:
                     t0 = clock()
-                    predicate(m, column, name, tz=tz, style=style)  # type: ignore[arg-type]
+                    predicate(m, column, name, tz=tz, style=style)
                     times.append((clock() - t0) / 1000)
     times.sort()
     return {"median_us": statistics.median(times), "p99_us": _percentile(times, 0.99),

@@ -92,7 +92,8 @@ def _cached_language(lang: str) -> dict[str, Any] | None:
     path = _cache_dir() / f"{lang}.json"
     if not path.is_file():
         return None
-    return json.loads(path.read_text(encoding="utf-8"))
+    data: dict[str, Any] = json.loads(path.read_text(encoding="utf-8"))
+    return data
 
 
 @functools.cache
@@ -100,7 +101,8 @@ def _cached_locales() -> dict[str, Any] | None:
     path = _cache_dir() / "_locales.json"
     if not path.is_file():
         return None
-    return json.loads(path.read_text(encoding="utf-8"))
+    data: dict[str, Any] = json.loads(path.read_text(encoding="utf-8"))
+    return data
 
 
 @functools.cache
@@ -136,7 +138,8 @@ def _extract_language_cached(lang: str) -> dict[str, Any]:
 def _locale_row(locale: str) -> list[Any]:
     table = _cached_locales()
     if table is not None and locale in table["locales"]:
-        return table["locales"][locale]
+        row: list[Any] = table["locales"][locale]
+        return row
     return _extract_locale_row(locale)
 
 

@@ -13,7 +13,7 @@ import json
 import sys
 import time
 from pathlib import Path
-from typing import IO, Any, Sequence
+from typing import IO, Any, Literal, Sequence
 
 __all__ = ["main"]
 
@@ -121,7 +121,7 @@ def _sql_adder(args: argparse.Namespace, ctx: Any) -> Any:
     from .sql import quoted_name
 
     quoted_name(column.name, d.name)
-    style = "literal" if args.literal else "params"
+    style: Literal["params", "literal"] = "literal" if args.literal else "params"
 
     def add(result: Any) -> Any:
         if result.error or not result.mentions:
@@ -142,7 +142,7 @@ def _sql_adder(args: argparse.Namespace, ctx: Any) -> Any:
 class _Parser(argparse.ArgumentParser):
     """argparse with one-line errors: ``nlnorm: error: <what was wrong>; see <prog> --help``."""
 
-    def error(self, message: str) -> Any:  # type: ignore[override]
+    def error(self, message: str) -> Any:
         self.exit(2, f"nlnorm: error: {message}; see '{self.prog} --help'\n")
 
 

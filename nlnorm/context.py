@@ -8,7 +8,7 @@ from __future__ import annotations
 
 import functools
 from datetime import date, datetime, timezone, tzinfo
-from typing import Any, Literal
+from typing import Any, Literal, cast
 from zoneinfo import ZoneInfo, ZoneInfoNotFoundError
 
 from pydantic import BaseModel, ConfigDict, Field, field_validator, model_validator
@@ -159,7 +159,7 @@ class Context(BaseModel):
         return cls.model_validate({"now": now, **kwargs})
 
     @classmethod
-    def model_validate(cls, obj: Any, **kwargs: Any) -> "Context":  # type: ignore[override]
+    def model_validate(cls, obj: Any, **kwargs: Any) -> "Context":
         from pydantic import ValidationError
 
         try:
@@ -247,7 +247,7 @@ class Context(BaseModel):
     @classmethod
     def _v_fiscal_start(cls, data: Any) -> Any:
         if isinstance(data, dict) and ("fiscal_start" in data or "fiscal_name" in data):
-            from .calendars.fiscal import FiscalYear, parse_fiscal_start
+            from .calendars.fiscal import FiscalYear, Naming, parse_fiscal_start
 
             data = dict(data)
             start = data.pop("fiscal_start", None)
@@ -262,7 +262,8 @@ class Context(BaseModel):
                     data["fiscal"] = dataclasses.replace(fiscal, naming=naming)
             else:
                 month, day = parse_fiscal_start(start)
-                data["fiscal"] = FiscalYear(month, day, naming)
+                # FiscalYear checks the naming and says what it expects
+                data["fiscal"] = FiscalYear(month, day, cast(Naming, naming))
         return data
 
     @field_validator("sprints", mode="before")
@@ -336,7 +337,7 @@ class Context(BaseModel):
         now = self.now
         tz_name = self.tz
         if tz_name:
-            tzinfo_: tzinfo = zone(tz_name)
+            tzinfo_: ZoneInfo = zone(tz_name)
         elif now.tzinfo is None:
             raise ContextError(
                 f"now={now.isoformat()!r} has no UTC offset and no tz was given; "

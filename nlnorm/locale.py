@@ -155,7 +155,8 @@ class LocaleFile(_Strict):
 
     @field_validator("inflections")
     @classmethod
-    def _inflection_keys(cls, value: dict[str, dict[str, tuple[str, ...]]]) -> dict:
+    def _inflection_keys(cls, value: dict[str, dict[str, tuple[str, ...]]]
+                         ) -> dict[str, dict[str, tuple[str, ...]]]:
         for kind, table in value.items():
             top = 12 if kind == "month" else 6
             low = 1 if kind == "month" else 0
@@ -361,23 +362,24 @@ def load_locale(code: str) -> LocaleData:
             raise LocaleError(f"locales/{current}.toml: parent chain loops ({' -> '.join(chain)})")
         path = base / f"{current}.toml"
         if path.is_file():
-            data, digest, stored = _load(path)
-            digests.append(digest)
+            data, file_digest, stored = _load(path)
+            digests.append(file_digest)
             if not chain:
                 generated = stored
         else:
             digests.append(None)
-            data = _cldr_only(current)
-            if data is None:
+            from_cldr = _cldr_only(current)
+            if from_cldr is None:
                 known = available_languages()
                 raise LocaleError(
                     f"no locale data for {current!r}{suggest(current, known)} "
                     f"(deep languages: {', '.join(sorted(known))}; any CLDR locale such as "
                     "'sw' or 'es_MX' works from CLDR data alone)"
                 )
+            data = from_cldr
         chain.append(current)
         files.append(data)
-        current = data.meta.parent if current != "root" else ""
+        current = (data.meta.parent or "") if current != "root" else ""
     digest = None
     if all(digests):
         digest = _digest(" ".join(f"{name}:{d}" for name, d in zip(chain, digests)))

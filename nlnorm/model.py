@@ -9,6 +9,7 @@ from __future__ import annotations
 import enum
 from dataclasses import dataclass, field
 from datetime import datetime
+from typing import Any
 
 __all__ = [
     "Grain",
@@ -101,7 +102,9 @@ class Candidate:
     confidence: float = 1.0
     nameable: bool = False  # a weak full month/weekday name that capitals can make a name
 
-    def slot(self, name: str, default: object = None) -> object:
+    def slot(self, name: str, default: Any = None) -> Any:
+        """The value a form captured under ``name`` (an int, a str or a tuple, as the form
+        made it: the reading says which), else ``default``."""
         for key, value in self.slots:
             if key == name:
                 return value
@@ -153,7 +156,7 @@ class Meaning:
         return tuple(self.__dict__[k] for k in self._fields)
 
     def __eq__(self, other: object) -> bool:
-        return type(other) is type(self) and other._values() == self._values()  # type: ignore[attr-defined]
+        return type(other) is type(self) and other._values() == self._values()
 
     def __hash__(self) -> int:
         return hash((type(self), self._values()))

@@ -96,6 +96,7 @@ def numeric_date(text: str, order: str) -> tuple[DateRef | None, DateRef | None]
     parts = [int(p) for p in text.split(sep)]
     if len(parts) != 3:
         return None, None
+    orders: tuple[str, ...]
     if parts[0] > 999:
         order, orders = "YMD", ("YMD",)
     else:
@@ -140,19 +141,19 @@ def parse_candidate(c: Candidate, ctx: "Context") -> Meaning | None:
     if r == "NOW":
         return Now()
     if r == "R1":
-        return RelativeDay(int(slot("relday")))  # type: ignore[arg-type]
+        return RelativeDay(int(slot("relday")))
     if r == "R2":
-        return ShiftPeriod(_grain(slot("unit"), ctx), int(slot("dir")))  # type: ignore[arg-type]
+        return ShiftPeriod(_grain(slot("unit"), ctx), int(slot("dir")))
     if r in ("R3", "R4"):
-        n = int(slot("num", 1))  # type: ignore[arg-type]
+        n = int(slot("num", 1))
         sign = -1 if r == "R3" else 1
         weekday = slot("count_weekday")
         if weekday is not None:
-            return WeekdayCount(int(weekday), sign * n)  # type: ignore[arg-type]
+            return WeekdayCount(int(weekday), sign * n)
         return Offset(_grain(slot("unit"), ctx), sign * n)
     if r in ("R5", "R6"):
         num = slot("num")
-        return Rolling(_grain(slot("unit"), ctx), int(num) if num is not None else 1,  # type: ignore[arg-type]
+        return Rolling(_grain(slot("unit"), ctx), int(num) if num is not None else 1,
                        -1 if r == "R5" else 1, num is not None)
     if r == "R21":
         grain = slot("to_date") or slot("unit")
@@ -160,31 +161,31 @@ def parse_candidate(c: Candidate, ctx: "Context") -> Meaning | None:
     if r == "R22":
         phrase = slot("dayperiod_phrase")
         if phrase is not None:
-            day, period = phrase  # type: ignore[misc]
+            day, period = phrase
             return DayPeriodRef(int(day), str(period), c.lang)
         period = slot("dayperiod") or "night1"
-        return DayPeriodRef(int(slot("relday", 0)), str(period), c.lang)  # type: ignore[arg-type]
+        return DayPeriodRef(int(slot("relday", 0)), str(period), c.lang)
     if r == "R23":
         direction = slot("dir")
-        return WeekendRef(int(direction) if direction is not None else 0, direction is None)  # type: ignore[arg-type]
+        return WeekendRef(int(direction) if direction is not None else 0, direction is None)
     if r in ("R13", "R14", "R15", "R16"):
-        weekday = int(slot("weekday"))  # type: ignore[arg-type]
+        weekday = int(slot("weekday"))
         if r == "R13":
             return WeekdayRef(weekday, "bare", deadline=bool(slot("deadline", False)))
         if r == "R16":
             offset = slot("dir", slot("offset", 0))
-            return WeekdayRef(weekday, "week", int(offset))  # type: ignore[arg-type]
+            return WeekdayRef(weekday, "week", int(offset))
         return WeekdayRef(weekday, "last" if r == "R14" else "next", -1 if r == "R14" else 1,
                           nearest=bool(slot("nearest", False)))
     if r == "D":
-        return Duration(_grain(slot("unit")), int(slot("num", 1)))  # type: ignore[arg-type]
+        return Duration(_grain(slot("unit")), int(slot("num", 1)))
     if r == "R24":
         number = slot("num")
         name = slot("sprint_name")
         last = slot("digits")
-        return SprintRef(int(number) if number is not None else None,  # type: ignore[arg-type]
+        return SprintRef(int(number) if number is not None else None,
                          str(name) if name is not None else None,
-                         int(last) if last is not None else None)  # type: ignore[arg-type]
+                         int(last) if last is not None else None)
     if r in ("R25", "R26"):
         return _parse_fiscal(c)
     meaning = _parse_date(c, ctx)
@@ -200,11 +201,11 @@ def _parse_fiscal(c: Candidate) -> Meaning | None:
     quarter = c.slot("qnum", c.slot("ordinal"))
     if quarter == -1 and year is None and two is None:
         return ShiftPeriod(Grain.FISCAL_QUARTER, -1)  # "the last fiscal quarter": the previous one
-    if quarter is not None and not 1 <= int(quarter) <= 4:  # type: ignore[arg-type]
+    if quarter is not None and not 1 <= int(quarter) <= 4:
         return None
     if two is not None:
-        return FiscalRef(2000 + int(two), int(quarter) if quarter is not None else None, True)  # type: ignore[arg-type]
-    return FiscalRef(int(year) if year is not None else None,  # type: ignore[arg-type]
+        return FiscalRef(2000 + int(two), int(quarter) if quarter is not None else None, True)
+    return FiscalRef(int(year) if year is not None else None,
                      int(quarter) if quarter is not None else None)
 
 
@@ -224,11 +225,11 @@ def _parse_date(c: Candidate, ctx: "Context") -> DateRef | None:
     offset = slot("relyear", slot("year_offset"))
     if year is None and offset is not None:
         # A year named relative to now ("去年12月": December of last year).
-        year = ctx.now.year + int(offset)  # type: ignore[arg-type]
+        year = ctx.now.year + int(offset)
     shift = slot("relmonth", slot("month_offset"))
     if slot("month") is None and shift is not None:
         # A month named relative to now ("来月15日": the 15th of next month).
-        shifted, index = divmod(ctx.now.year * 12 + ctx.now.month - 1 + int(shift), 12)  # type: ignore[arg-type]
+        shifted, index = divmod(ctx.now.year * 12 + ctx.now.month - 1 + int(shift), 12)
         year = shifted if year is None else year
         c = Candidate(c.span, c.lang, c.reading, c.slots + (("month", index + 1),), c.weak)
         slot = c.slot
@@ -239,7 +240,7 @@ def _parse_date(c: Candidate, ctx: "Context") -> DateRef | None:
     week = slot("week")
     day = slot("day")
     if ordinal is not None:
-        n = int(ordinal)  # type: ignore[arg-type]
+        n = int(ordinal)
         # "first quarter" / "second half": the form says which; halves have two, quarters four.
         if _is_half_form(c):
             half = 2 if n == -1 else n
@@ -250,27 +251,27 @@ def _parse_date(c: Candidate, ctx: "Context") -> DateRef | None:
             if quarter not in (1, 2, 3, 4):
                 return None
     grain = _date_grain(year, half, quarter, month, week, day)
-    y = int(year) if year is not None else None  # type: ignore[arg-type]
-    if day is not None and month is not None and y is not None and not _valid(y, int(month), int(day)):  # type: ignore[arg-type]
+    y = int(year) if year is not None else None
+    if day is not None and month is not None and y is not None and not _valid(y, int(month), int(day)):
         return None
-    if day is not None and month is not None and int(day) > _max_day(int(month)):  # type: ignore[arg-type]
+    if day is not None and month is not None and int(day) > _max_day(int(month)):
         return None
-    if week is not None and y is not None and int(week) == 53 and not _has_week_53(y):  # type: ignore[arg-type]
+    if week is not None and y is not None and int(week) == 53 and not _has_week_53(y):
         return None
     weekday_of_week = slot("isoday")
     if weekday_of_week is not None and week is not None and y is not None:
         from datetime import date
 
-        d = date.fromisocalendar(y, int(week), int(weekday_of_week))  # type: ignore[arg-type]
+        d = date.fromisocalendar(y, int(week), int(weekday_of_week))
         return DateRef(Grain.DAY, year=d.year, month=d.month, day=d.day)
     return DateRef(
         grain,
         year=y,
-        half=int(half) if half is not None else None,  # type: ignore[arg-type]
-        quarter=int(quarter) if quarter is not None else None,  # type: ignore[arg-type]
-        month=int(month) if month is not None else None,  # type: ignore[arg-type]
-        week=int(week) if week is not None else None,  # type: ignore[arg-type]
-        day=int(day) if day is not None else None,  # type: ignore[arg-type]
+        half=int(half) if half is not None else None,
+        quarter=int(quarter) if quarter is not None else None,
+        month=int(month) if month is not None else None,
+        week=int(week) if week is not None else None,
+        day=int(day) if day is not None else None,
     )
 
 

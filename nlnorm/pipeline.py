@@ -121,12 +121,12 @@ def normalize_item(
         local = ctx
         if overrides:
             key = tuple(sorted((k, repr(v)) for k, v in overrides.items()))
-            found = cache.get(key) if cache is not None else None
-            if found is None:
-                found = context_with(ctx, overrides)
+            known = cache.get(key) if cache is not None else None
+            if known is None:
+                known = context_with(ctx, overrides)
                 if cache is not None and len(cache) < 1024:
-                    cache[key] = found
-            local = found
+                    cache[key] = known
+            local = known
         return normalize(text, local, id=item_id)
     except NlnormError as exc:
         return Result(id=item_id, text=text if isinstance(text, str) else None, error=str(exc))

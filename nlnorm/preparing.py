@@ -52,9 +52,10 @@ class Prepared:
 
 
 _new = object.__new__
-_set_original = Prepared.original.__set__  # type: ignore[attr-defined]  # the slots' setters
-_set_text = Prepared.text.__set__  # type: ignore[attr-defined]
-_set_offsets = Prepared.offsets.__set__  # type: ignore[attr-defined]
+_slot = Prepared.__dict__  # the slots' descriptors: their setters write a field directly
+_set_original = _slot["original"].__set__
+_set_text = _slot["text"].__set__
+_set_offsets = _slot["offsets"].__set__
 
 
 def _prepared(original: str, text: str, offsets: tuple[int, ...] | None) -> Prepared:

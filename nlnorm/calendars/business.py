@@ -16,7 +16,7 @@ from __future__ import annotations
 import functools
 from dataclasses import dataclass, field
 from datetime import date, timedelta
-from typing import Iterable, Mapping
+from typing import Callable, Iterable, Mapping
 
 from ..errors import ContextError
 
@@ -145,7 +145,7 @@ def parse_holidays(value: str) -> tuple[str, str | None]:
 
 
 @functools.lru_cache(maxsize=64)
-def holiday_source(country: str, subdivision: str | None):  # type: ignore[no-untyped-def]
+def holiday_source(country: str, subdivision: str | None) -> Callable[[int], Mapping[date, str]]:
     """A function year -> {date: holiday name} for a country (and subdivision), from the
     ``holidays`` package with its defaults (observed days included). Imported on first use:
     the package costs ~60 ms to import."""

@@ -30,7 +30,8 @@ Naming = Literal["start", "end"]
 class FiscalCalendar(Protocol):
     """What resolution needs of a fiscal calendar (both kinds below provide it)."""
 
-    naming: Naming
+    @property
+    def naming(self) -> Naming: ...
 
     def year_of(self, day: date) -> int: ...
     def year_span(self, year: int) -> tuple[date, date]: ...

@@ -11,6 +11,7 @@ from __future__ import annotations
 
 import functools
 from datetime import date, datetime, time, timedelta, timezone
+from typing import cast
 from zoneinfo import ZoneInfo
 
 from ..model import Grain
@@ -215,7 +216,7 @@ def _starts_unit(change: datetime, before: timedelta, tz: ZoneInfo, grain: Grain
     clock was set back (the repeated time is a unit of its own), or it jumped to a whole unit
     or into another unit."""
     after = change.astimezone(tz)
-    if after.utcoffset() < before:
+    if cast(timedelta, after.utcoffset()) < before:
         return True
     wall = after.replace(tzinfo=None)
     just_before = (change + before).replace(tzinfo=None) - timedelta(microseconds=1)

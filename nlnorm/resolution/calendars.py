@@ -10,10 +10,10 @@ Readings are documented in docs/readings.md (R2-R6 with these units, R24-R26).
 from __future__ import annotations
 
 from datetime import date, datetime, timedelta
-from typing import TYPE_CHECKING, Any, Sequence
+from typing import TYPE_CHECKING, Any, Sequence, cast
 
 from ..calendars import add_units, day_span, start_of_day
-from ..calendars.fiscal import FiscalYear
+from ..calendars.fiscal import FiscalCalendar, FiscalYear
 from ..model import FiscalRef, Grain, Interval, Offset, Reading, Rolling, ShiftPeriod, SprintRef
 from .common import Outcome, dates, instants, interval_value, reading
 
@@ -290,7 +290,7 @@ def _business_window(n: int, direction: int, ctx: "Context", rid: str) -> Outcom
 # --- fiscal years and quarters ----------------------------------------------------------------
 
 
-def _fiscal(ctx: "Context") -> tuple[Any, str]:
+def _fiscal(ctx: "Context") -> tuple[FiscalCalendar, str]:
     if ctx.fiscal is not None:
         return ctx.fiscal, ctx.fiscal.describe()
     return FiscalYear(), "no fiscal calendar was given (fiscal_start): read as the calendar year"
@@ -326,7 +326,8 @@ def _fiscal_shift(grain: Grain, k: int, ctx: "Context", rid: str) -> Outcome:
     if grain is Grain.FISCAL_YEAR:
         return _fiscal_reading(cal, cal.year_of(today) + k, None, rid, which.format("year"), ctx,
                                describe=describe), ()
-    year, q = _quarter_plus(*cal.quarter_of(today), k)
+    fiscal_year, quarter = cal.quarter_of(today)
+    year, q = _quarter_plus(fiscal_year, quarter, k)
     return _fiscal_reading(cal, year, q, rid, which.format("quarter"), ctx, describe=describe), ()
 
 
@@ -335,13 +336,15 @@ def _fiscal_window(grain: Grain, n: int, direction: int, ctx: "Context", rid: st
     today = ctx.now.date()
     now = ctx.now
     months = 12 if grain is Grain.FISCAL_YEAR else 3
-    if grain is Grain.FISCAL_YEAR:
-        current = cal.year_span(cal.year_of(today))
-        span = lambda k: cal.year_span(cal.year_of(today) + k)  # noqa: E731
-    else:
-        y, q = cal.quarter_of(today)
-        current = cal.quarter_span(y, q)
-        span = lambda k: cal.quarter_span(*_quarter_plus(y, q, k))  # noqa: E731
+    y, q = cal.quarter_of(today)
+
+    def span(k: int) -> tuple[date, date]:
+        """The fiscal year or quarter ``k`` from the current one: (first day, day after)."""
+        if grain is Grain.FISCAL_YEAR:
+            return cal.year_span(cal.year_of(today) + k)
+        return cal.quarter_span(*_quarter_plus(y, q, k))
+
+    current = span(0)
     unit = "fiscal year(s)" if grain is Grain.FISCAL_YEAR else "fiscal quarter(s)"
     if direction < 0:
         whole = instants(start_of_day(span(-n)[0], ctx.zone), start_of_day(current[0], ctx.zone), grain)
@@ -394,7 +397,7 @@ def fiscal_ref(m: FiscalRef, ctx: "Context") -> Outcome | None:
         import dataclasses
 
         other_naming = "start" if naming == "end" else "end"
-        other = dataclasses.replace(cal, naming=other_naming)
+        other = dataclasses.replace(cast(Any, cal), naming=other_naming)  # both kinds are dataclasses
         note = f"{said} named by the year it {'starts' if other_naming == 'start' else 'ends'} in"
         alts.append(_fiscal_reading(other, m.year, m.quarter, rid, note, ctx, f"fiscal_name={other_naming}"))
     return chosen, tuple(alts) + _calendar_quarter(m, ctx)

@@ -52,7 +52,7 @@ def instants(start: datetime | None, end: datetime | None, grain: Grain) -> Inte
 
 def is_day_start(moment: datetime | None) -> bool:
     """Whether ``moment`` is the first instant of its local day (or unbounded)."""
-    return moment is None or moment == start_of_day(moment.date(), moment.tzinfo)  # type: ignore[arg-type]
+    return moment is None or moment == start_of_day(moment.date(), moment.tzinfo)
 
 
 def interval_value(start: datetime | None, end: datetime | None) -> str:

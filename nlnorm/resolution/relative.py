@@ -15,6 +15,7 @@ from ..model import (
     Interval,
     Now,
     Offset,
+    Reading,
     RelativeDay,
     Rolling,
     ShiftPeriod,
@@ -103,7 +104,7 @@ def rolling(m: Rolling, ctx: "Context") -> Outcome:
     return roll, () if same else (_with_policy(cal, "window_reading=calendar"),)
 
 
-def _with_policy(r, policy: str):  # type: ignore[no-untyped-def]
+def _with_policy(r: Reading, policy: str) -> Reading:
     return reading(r.interval, r.reading, r.note, policy)
 
 
@@ -144,7 +145,7 @@ def weekend(m: WeekendRef, ctx: "Context") -> Outcome:
     assert upcoming is not None
     last_ended = (current or upcoming) - timedelta(days=7)
 
-    def span(first: date, rid: str, note: str, policy: str | None = None):  # type: ignore[no-untyped-def]
+    def span(first: date, rid: str, note: str, policy: str | None = None) -> Reading:
         names = "-".join(WEEKDAY_NAMES[d][:3] for d in (days[0], days[-1])) if length > 1 else WEEKDAY_NAMES[days[0]]
         interval = dates(first, first + timedelta(days=length), Grain.DAY, ctx,
                          value=f"{first.isoformat()}/P{length}D")

@@ -17,6 +17,8 @@ from .scanner import Scanner, scanner_for
 
 if TYPE_CHECKING:
     from ..context import Context
+    from .forms import Form
+    from .scanner import Bucket
 
 __all__ = ["scan", "scan_text", "scanner_for", "Scanner"]
 
@@ -223,8 +225,8 @@ def _state(scanner: Scanner) -> _State:
             # With such a language on, every character that can start a word of theirs counts.
             letters = re.compile(re.sub(r"[0-9]", "", gate.pattern)) if latin else _OTHER_SCRIPT
         found = ({}, letters)
-        scanner._cache["words"] = found  # type: ignore[assignment]
-    return found  # type: ignore[return-value]
+        scanner._cache["words"] = found
+    return found
 
 
 _NEVER = re.compile(r"(?!)")
@@ -338,14 +340,14 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
                     elided = _elided_start(text, lead)
                     if elided is not None:
                         positions.add(elided)
-    found: list[tuple[re.Match[str], object]] = []  # (match, form) of each phrase
+    found: list[tuple[re.Match[str], Form]] = []  # (match, form) of each phrase
     limit = 0
     pair = _PAIR.match
     # The forms of languages without spaces are tried only where _marks looks for them.
     unspaced = scanner.unspaced and lettered
     starts = scanner._cache.get("starts")
     if starts is None:
-        starts = scanner._cache["starts"] = {}  # type: ignore[assignment]
+        starts = scanner._cache["starts"] = {}
     for pos in sorted(positions) if len(positions) > 1 else positions:
         if pos < limit:
             continue
@@ -388,6 +390,7 @@ def _scan_exact(prepared: Prepared, scanner: Scanner,
                     m = _longest(bucket, text, pos, m, prefer)
                 end = m.end()
                 if end > best_end:
+                    # each alternative of a bucket is a named group: lastgroup is never None
                     best, best_end = (m, bucket.forms[m.lastgroup]), end  # type: ignore[index]
                 elif end == best_end and best is not None:
                     form = bucket.forms[m.lastgroup]  # type: ignore[index]
@@ -423,10 +426,10 @@ _DIGIT_KEYS = ("", "#1", "#2", "#3", "#4")
 
 
 def _buckets_at(scanner: Scanner, first: str, second: str, at_word: bool, ch: str
-                ) -> tuple[tuple[bool, tuple[object, ...]], ...]:
+                ) -> tuple[tuple[bool, tuple[Bucket, ...]], ...]:
     """The buckets to try at a place: by its first two runs (at a word start) and by its first
     character (languages without spaces), each marked whether it is a by-character one."""
-    out: list[tuple[bool, tuple[object, ...]]] = []
+    out: list[tuple[bool, tuple[Bucket, ...]]] = []
     if at_word and first:
         out.append((False, scanner.buckets((first, second))))
         if second:
@@ -442,13 +445,14 @@ def _preferences(scanner: Scanner, text: str) -> dict[str, int]:
     return {lang: 1 if rx.search(text) else -1 for lang, rx in scanner.marks}
 
 
-def _longest(bucket, text: str, pos: int, m, prefer=None):  # type: ignore[no-untyped-def]
+def _longest(bucket: Bucket, text: str, pos: int, m: re.Match[str],
+             prefer: dict[str, int] | None = None) -> re.Match[str]:
     """The longest match of a bucket's forms at ``pos``. Without word boundaries a form may
     end anywhere ("这个周" inside "这个周末"), so the first alternative that matches is not
     always the longest. On a tie the language ``prefer`` ranks higher wins (see Meta.marks),
     else the bucket's order (the more specific form) stays."""
     rank = (prefer or {}).get
-    best, best_rank = m, rank(bucket.forms[m.lastgroup].lang, 0)
+    best, best_rank = m, rank(bucket.forms[m.lastgroup].lang, 0)  # type: ignore[index]
     for form in bucket.forms.values():
         other = form.regex.match(text, pos)
         if other is None:
@@ -458,13 +462,13 @@ def _longest(bucket, text: str, pos: int, m, prefer=None):  # type: ignore[no-un
     return best
 
 
-def _candidate(m, form, scanner: Scanner, prepared: Prepared) -> Candidate:  # type: ignore[no-untyped-def]
+def _candidate(m: re.Match[str], form: Form, scanner: Scanner, prepared: Prepared) -> Candidate:
     slots, weak, nameable = _values(m, form, scanner, prepared)
     return Candidate(Span(m.start(), m.end()), form.lang, form.reading, slots, weak,
                      nameable=nameable)
 
 
-def _values(m, form, scanner: Scanner, prepared: Prepared  # type: ignore[no-untyped-def]
+def _values(m: re.Match[str], form: Form, scanner: Scanner, prepared: Prepared
             ) -> tuple[tuple[tuple[str, object], ...], bool, bool]:
     """The slots of a form's match, whether the phrase is weak, and whether it is nameable."""
     lex = scanner.lexicons.get(form.lang) or next(iter(scanner.lexicons.values()))

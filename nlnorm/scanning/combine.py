@@ -15,7 +15,7 @@ from typing import Mapping
 from ..locale import load_locale
 from ..model import Candidate, Span
 from ..preparing import Prepared
-from .scanner import Scanner
+from .scanner import Connectives, Scanner
 
 __all__ = ["combine", "dropped_alone"]
 
@@ -346,7 +346,7 @@ def _closing(scanner: Scanner, text: str, end: int, lang: str) -> int | None:
     return post.end() if _relations(scanner, word, lang) & {"between_post", "until_post"} else None
 
 
-def _ends_with_join(conn, text: str, a: Candidate) -> str | None:  # type: ignore[no-untyped-def]
+def _ends_with_join(conn: Connectives, text: str, a: Candidate) -> str | None:
     """The range join of its language that the phrase ``a`` ends with, written as an ending
     (languages with particles: the Turkish ablative "Mart'tan", Korean "3월과"), if any."""
     endings = conn.join_endings.get(a.lang, ())

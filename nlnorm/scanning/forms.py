@@ -23,7 +23,7 @@ from __future__ import annotations
 import functools
 import re
 import sys
-from collections.abc import Iterable
+from collections.abc import Iterable, Mapping
 from dataclasses import dataclass
 
 from ..errors import LocaleError
@@ -236,8 +236,8 @@ def key_of(text: str) -> str:
     return run
 
 
-def _first_words(words: object) -> set[str]:
-    return {w.split()[0] for w in words if w.split()}  # type: ignore[union-attr]
+def _first_words(words: Iterable[str]) -> set[str]:
+    return {w.split()[0] for w in words if w.split()}
 
 
 @dataclass(frozen=True, slots=True)

@@ -13,7 +13,7 @@ import hashlib
 import re
 from dataclasses import dataclass
 from types import MappingProxyType
-from typing import Any, Mapping
+from typing import Any, Iterator, Mapping
 
 from .. import cldr
 from ..locale import POST_RELATIONS, load_locale
@@ -90,7 +90,7 @@ def trie_regex(words: list[str] | tuple[str, ...] | frozenset[str], spaces: str 
     >>> trie_regex(["may", "mayday", "march"])
     'ma(?:rch|y(?:day)?)'
     """
-    trie: dict[str, dict] = {}
+    trie: dict[str, Any] = {}  # character -> subtree; "" marks a word's end
     for word in words:
         if not word:
             continue
@@ -99,7 +99,7 @@ def trie_regex(words: list[str] | tuple[str, ...] | frozenset[str], spaces: str 
             node = node.setdefault(ch, {})
         node[""] = {}
 
-    def emit(node: dict[str, dict]) -> str:
+    def emit(node: dict[str, Any]) -> str:
         end = "" in node
         branches = []
         for ch in sorted(k for k in node if k):
@@ -158,7 +158,7 @@ class Patterns(Mapping[str, str]):
     def __contains__(self, cls: object) -> bool:
         return cls in self._names
 
-    def __iter__(self):  # type: ignore[no-untyped-def]
+    def __iter__(self) -> Iterator[str]:
         return iter(sorted(self._names))
 
     def __len__(self) -> int:
@@ -321,7 +321,8 @@ def lexicon(lang: str) -> Lexicon:
     if stored is None:
         return fresh_lexicon(lang)
     table = stored["lexicon"]
-    words = {cls: ({w: tuple(v) for w, v in entries.items()} if cls in _TUPLE_VALUES else entries)
+    words: dict[str, dict[str, object]] = {
+        cls: ({w: tuple(v) for w, v in entries.items()} if cls in _TUPLE_VALUES else entries)
              for cls, entries in table["words"].items()}
     return _build(lang, words, frozenset(table["triggers"]))
 

@@ -111,7 +111,7 @@ def _bind(prepared: Prepared, found: list[Candidate], scanner: "Scanner") -> tup
         pre = conn.before.search(text, max(0, bare_starts[i] - 32), bare_starts[i])
         word = _group(pre, "c", "c2") if pre else None
         rel = _relations(scanner, word, a.lang) if word else frozenset()
-        if rel and bare_starts[i] != a.span.start and _start(pre, "c", "c2") >= a.span.start:
+        if rel and pre and bare_starts[i] != a.span.start and _start(pre, "c", "c2") >= a.span.start:
             rel = frozenset()  # the joined word alone ("по Foxglove-спринту"): it stays joined
         if not rel:
             pre = conn.before.search(text, max(0, a.span.start - 32), a.span.start)

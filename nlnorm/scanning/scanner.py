@@ -18,7 +18,7 @@ from collections.abc import Set as AbstractSet
 from contextlib import contextmanager
 from dataclasses import dataclass, field
 from types import MappingProxyType
-from typing import Any, Mapping, NamedTuple
+from typing import Any, Mapping, NamedTuple, TypeAlias
 
 from .. import cldr
 from ..locale import load_locale
@@ -91,6 +91,9 @@ class LazyPattern:
         return f"LazyPattern({'compiled' if self._rx is not None else 'not compiled yet'})"
 
 
+#: A compiled expression, or one compiled when first used.
+PatternLike: TypeAlias = "re.Pattern[str] | LazyPattern"
+
 #: Relations whose words a language with particles may glue to the phrase before them:
 #: postpositions ("지난주부터") and the joins of a range ("3월과 5월 사이").
 _GLUED_AFTER = POST_RELATIONS | {"range_join", "between_join"}
@@ -100,11 +103,11 @@ _GLUED_AFTER = POST_RELATIONS | {"range_join", "between_join"}
 class Connectives:
     """Connective words of the enabled languages, as expressions and lookups."""
 
-    before: re.Pattern[str]  # a connective phrase right before a position (search, endpos)
-    join: re.Pattern[str]  # the whole gap between two phrases of a range (fullmatch)
-    suffix: re.Pattern[str]  # "onwards" after a phrase (match at its end)
-    day_end: re.Pattern[str]  # "-17" after "March 3" (match at its end)
-    day_start: re.Pattern[str]  # "3 -" before "17 March" (search, endpos)
+    before: PatternLike  # a connective phrase right before a position (search, endpos)
+    join: PatternLike  # the whole gap between two phrases of a range (fullmatch)
+    suffix: PatternLike  # "onwards" after a phrase (match at its end)
+    day_end: PatternLike  # "-17" after "March 3" (match at its end)
+    day_start: PatternLike  # "3 -" before "17 March" (search, endpos)
     relations: Mapping[str, Mapping[str, frozenset[str]]]  # phrase -> lang -> relations
     joins: Mapping[str, Mapping[str, frozenset[str]]]
     last_words: frozenset[str]  # the last word of every spaced connective before a phrase
@@ -157,11 +160,11 @@ class Scanner:
     lexicons: Mapping[str, Lexicon]
     connectives: Connectives
     pending: tuple["Pending", ...]  # every form, curated and CLDR-generated
-    _cache: dict[object, tuple[Bucket, ...]]
+    _cache: dict[object, Any]  # memories of this scanner by key: buckets, word kinds, starts
     _compiled: dict[int, Form]  # CLDR-generated forms compiled so far, by order
     unspaced: bool = False  # some language is written without spaces: try per-character buckets
     lookback: int = 48  # characters before a trigger in which leading words are tried
-    marks: tuple[tuple[str, re.Pattern[str]], ...] = ()  # (language, its marks): see Meta.marks
+    marks: tuple[tuple[str, PatternLike], ...] = ()  # (language, its marks): see Meta.marks
     #: The first two characters of the words of ``unspaced_marks`` (the first one alone when
     #: the word is one character, or its second is a space): a place whose first two or first
     #: character are not among them starts none of them.
@@ -536,9 +539,11 @@ def _connectives(languages: tuple[str, ...]) -> Connectives:
             rf"(?P<d>3[01]|[12]\d|0?[1-9]){osfx()}(?:\s+(?P<j>{spaced_join()})\s+|\s*-\s*)$"
         )
 
-    freeze = lambda table: MappingProxyType(  # noqa: E731
-        {k: MappingProxyType({lg: frozenset(v) for lg, v in d.items()}) for k, d in table.items()}
-    )
+    def freeze(table: Mapping[str, Mapping[str, Iterable[str]]]
+               ) -> Mapping[str, Mapping[str, frozenset[str]]]:
+        return MappingProxyType({k: MappingProxyType({lg: frozenset(v) for lg, v in d.items()})
+                                 for k, d in table.items()})
+
     last_words = frozenset(w.split()[-1] for w in before_words if w.split() and w not in glued)
     glued_tails = frozenset(w[-1] for w in before_words if w in glued)
     return Connectives(LazyPattern(before), LazyPattern(join), LazyPattern(suffix),
@@ -722,11 +727,11 @@ def _scanner(languages: tuple[str, ...]) -> Scanner:
         triggers = cldr_triggers[spaced]
         mine_triggers = lang_triggers[lang]
         num_keys = sorted(_cheap_first(_NUM_START, lex))
-        for source, reading, fixed, keys, leader, trigger in cldr_own:
+        for source, reading, fixed, cldr_keys, leader, trigger in cldr_own:
             p = Pending(lang, source, reading, fixed, order, "", spaced)
             order += 1
             pending.append(p)
-            for key in num_keys if keys == _NUM_START else keys:
+            for key in num_keys if cldr_keys == _NUM_START else cldr_keys:
                 generated[key].append(p)
             if leader:
                 leaders_spaced.add(leader)
@@ -788,7 +793,7 @@ def _scanner(languages: tuple[str, ...]) -> Scanner:
         _compiled={},
         unspaced=any(not lex.spaces for lex in lexicons.values()),
         marks=tuple((lang, LazyPattern(functools.partial(_mark_class, load_locale(lang).meta.marks)))
-                    for lang in languages if load_locale(lang).meta.marks),  # type: ignore[misc]
+                    for lang in languages if load_locale(lang).meta.marks),
     )
 
 

@@ -16,7 +16,7 @@ import re
 from collections import defaultdict
 from dataclasses import dataclass, field, replace
 from types import MappingProxyType
-from typing import TYPE_CHECKING, Mapping
+from typing import TYPE_CHECKING, Callable, Mapping, cast
 
 from ..locale import load_locale
 from ..model import Candidate, Span
@@ -41,7 +41,7 @@ class TypoIndex:
     known: frozenset[str]
     heads: frozenset[str]  # first three letters of the time words
     tails: frozenset[str]  # last three letters
-    memo: dict[str, object] = field(default_factory=dict)  # word -> its correction (or None)
+    memo: dict[str, str | None] = field(default_factory=dict)  # word -> its correction (or None)
     fixable: set[str] = field(default_factory=set)  # the words of memo that have a correction
 
 
@@ -143,7 +143,7 @@ def corrections(text: str, index: TypoIndex, taken: list[Span]) -> list[tuple[in
         start, end = m.span()
         if any(s.start < end and start < s.end for s in taken):
             continue
-        out.append((start, end, fix))  # type: ignore[arg-type]
+        out.append((start, end, fix))
     return out
 
 
@@ -152,9 +152,9 @@ def index_of(scanner: "Scanner") -> TypoIndex | None:
     ``None`` when none of them is written with spaces)."""
     cache = scanner._cache
     if "typos" not in cache:
-        cache["typos"] = typo_index(  # type: ignore[assignment]
+        cache["typos"] = typo_index(
             scanner.languages, tuple(scanner.lexicons[lang] for lang in scanner.languages))
-    return cache["typos"]  # type: ignore[return-value]
+    return cast("TypoIndex | None", cache["typos"])
 
 
 def holds_typo(word: str, index: TypoIndex | None) -> bool:
@@ -241,7 +241,7 @@ def mapped(c: Candidate, back: list[int], note: str) -> Candidate:
 
 
 def typo_candidates(prepared: Prepared, scanner: "Scanner", exact: tuple[Candidate, ...],
-                    scan_exact) -> tuple[Candidate, ...]:  # type: ignore[no-untyped-def]
+                    scan_exact: Callable[..., tuple[Candidate, ...]]) -> tuple[Candidate, ...]:
     """Phrases found only after correcting misspelt time words (the caller has seen that a
     word of the question may be one: see :func:`holds_typo`)."""
     index = index_of(scanner)

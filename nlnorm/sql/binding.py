@@ -107,7 +107,7 @@ def bind(
     # A driver taking %s / %(name)s placeholders reads every other "%" as one too: the SQL's
     # own ("LIKE '%bug%'") are doubled, as such drivers require.
     percent = ps in ("format", "pyformat")
-    own = (lambda text: text.replace("%", "%%")) if percent else (lambda text: text)
+    own = _doubled_percent if percent else _as_written
     pieces: list[str] = []
     cursor = 0
     for a, b in _code_spans(sql, d.name):
@@ -117,6 +117,14 @@ def bind(
         cursor = b
     pieces.append(own(sql[cursor:]))
     return "".join(pieces), params.result()
+
+
+def _doubled_percent(text: str) -> str:
+    return text.replace("%", "%%")
+
+
+def _as_written(text: str) -> str:
+    return text
 
 
 def _mention(slots: dict[str, Any], slot: str) -> Any:
