@@ -93,19 +93,18 @@ def _sql_options(p: argparse.ArgumentParser) -> None:
 def _sql_adder(args: argparse.Namespace, ctx: Any) -> Any:
     """A function adding the ``sql`` field to a result's period mentions, or ``None`` when no
     SQL was asked for."""
+    from .errors import InputError
+
     given = [f for f in ("dialect", "paramstyle", "column_zone", "sqlite_encoding", "sprint_key")
              if getattr(args, f, None) is not None] + (["literal"] if getattr(args, "literal", False) else [])
     if args.sql_column is None:
         if given:
-            from .errors import InputError
-
             flags = ", ".join("--" + f.replace("_", "-") for f in given)
             raise InputError(f"{flags}: used only with --sql-column NAME (the column to write "
                              "predicates over)")
         return None
-    from .errors import InputError
     from .schema import SqlPredicate
-    from .sql import Column, dialect, predicate
+    from .sql import Column, dialect, predicate, quoted_name
 
     if args.dialect is None:
         raise InputError("--sql-column needs --dialect: one of sqlite, duckdb, postgres, mysql, "
@@ -117,10 +116,7 @@ def _sql_adder(args: argparse.Namespace, ctx: Any) -> Any:
         raise InputError("--sprint-key needs --sprints FILE (the table holding the sprints' ids)")
     column = Column(args.sql_column, args.column_kind, zone=args.column_zone,
                     encoding=args.sqlite_encoding)
-    # Checked now, so a bad column name is one error, not one per line.
-    from .sql import quoted_name
-
-    quoted_name(column.name, d.name)
+    quoted_name(column.name, d.name)  # checked now: a bad name is one error, not one per line
     style: Literal["params", "literal"] = "literal" if args.literal else "params"
 
     def add(result: Any) -> Any:

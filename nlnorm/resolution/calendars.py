@@ -336,13 +336,18 @@ def _fiscal_window(grain: Grain, n: int, direction: int, ctx: "Context", rid: st
     today = ctx.now.date()
     now = ctx.now
     months = 12 if grain is Grain.FISCAL_YEAR else 3
-    y, q = cal.quarter_of(today)
+    if grain is Grain.FISCAL_YEAR:
+        this_year = cal.year_of(today)
 
-    def span(k: int) -> tuple[date, date]:
-        """The fiscal year or quarter ``k`` from the current one: (first day, day after)."""
-        if grain is Grain.FISCAL_YEAR:
-            return cal.year_span(cal.year_of(today) + k)
-        return cal.quarter_span(*_quarter_plus(y, q, k))
+        def span(k: int) -> tuple[date, date]:
+            """The fiscal year ``k`` from the current one: (first day, day after)."""
+            return cal.year_span(this_year + k)
+    else:
+        y, q = cal.quarter_of(today)
+
+        def span(k: int) -> tuple[date, date]:
+            """The fiscal quarter ``k`` from the current one: (first day, day after)."""
+            return cal.quarter_span(*_quarter_plus(y, q, k))
 
     current = span(0)
     unit = "fiscal year(s)" if grain is Grain.FISCAL_YEAR else "fiscal quarter(s)"

@@ -16,12 +16,15 @@ doubled, as those drivers require.
 from __future__ import annotations
 
 import re
+from collections.abc import Callable
+from datetime import datetime
 from typing import Any
+from zoneinfo import ZoneInfo
 
-from .columns import Column, bound_value
-from .dialects import dialect as dialect_named
+from .columns import Column, bound_value, iana_zone
+from .dialects import Dialect, dialect as dialect_named
 from .errors import SqlError
-from .fragments import ColumnChoice, _as_column, _bind_value, _column_for, _Params, predicate, _zone
+from .fragments import ColumnChoice, _as_column, _column_for, _Params, _where, bound_placeholder, placeholder
 
 __all__ = ["bind"]
 
@@ -101,7 +104,8 @@ def bind(
         raise SqlError("the result has no reference (it holds an error): nothing to bind")
     d = dialect_named(dialect)
     ps = paramstyle or d.paramstyle
-    zone = _zone(result.reference.tz)
+    placeholder(ps, "t1", 1)  # checks the paramstyle
+    zone = iana_zone(result.reference.tz, "tz")
     slots = {f"t{i}": m for i, m in enumerate(result.mentions, start=1)}
     params = _Params(ps)
     # A driver taking %s / %(name)s placeholders reads every other "%" as one too: the SQL's
@@ -112,7 +116,7 @@ def bind(
     cursor = 0
     for a, b in _code_spans(sql, d.name):
         pieces.append(own(sql[cursor:a]))
-        pieces.append(_bind_code(sql[a:b], slots, d.name, ps, params, column, kind, zone,
+        pieces.append(_bind_code(sql[a:b], slots, d, params, column, kind, zone,
                                  sprint_key, sprints, team, own))
         cursor = b
     pieces.append(own(sql[cursor:]))
@@ -135,9 +139,9 @@ def _mention(slots: dict[str, Any], slot: str) -> Any:
     return found
 
 
-def _bind_code(code: str, slots: dict[str, Any], dialect_name: str, ps: str, params: _Params,
-               column: ColumnChoice | None, kind: str, zone: Any, sprint_key: str | None,
-               sprints: Any, team: str | None, own: Any = None) -> str:
+def _bind_code(code: str, slots: dict[str, Any], d: Dialect, params: _Params,
+               column: ColumnChoice | None, kind: str, zone: ZoneInfo, sprint_key: str | None,
+               sprints: Any, team: str | None, own: Callable[[str], str]) -> str:
     def whole(m: re.Match[str]) -> str:
         slot, named_column = m.group(1), m.group(2)
         mention = _mention(slots, slot)
@@ -146,19 +150,13 @@ def _bind_code(code: str, slots: dict[str, Any], dialect_name: str, ps: str, par
         if chosen is None:
             raise SqlError(f"{{{slot}}} needs a column: write {{{slot}:created_at}} in the SQL "
                            "or pass column=...")
-        frag = predicate(mention, chosen, dialect_name, tz=zone, slot=slot, kind=kind,
-                         paramstyle=ps, sprint_key=sprint_key, sprints=sprints, team=team,
-                         first_index=params.index)
-        if frag is None:
+        where = _where(mention, _as_column(chosen, kind), d, zone, slot, "params", params,
+                       sprint_key, sprints, team)
+        if where is None:
             article = "an" if mention.kind[:1] in "aeiou" else "a"
             raise SqlError(f"{{{slot}}} is {mention.text!r}, {article} {mention.kind}, not a period: "
                            "there is no predicate to write for it")
-        values = frag.params.values() if isinstance(frag.params, dict) else frag.params
-        names = list(frag.params) if isinstance(frag.params, dict) else [None] * len(values)
-        for name, value in zip(names, values):
-            params.index += 1
-            params.values.append((name or slot, value))
-        return f"({frag.where})"
+        return f"({where})"
 
     def one(m: re.Match[str]) -> str:
         slot, side = m.group(3), m.group(4)
@@ -169,15 +167,8 @@ def _bind_code(code: str, slots: dict[str, Any], dialect_name: str, ps: str, par
                            f"side); write {{{slot}:column}} to let nlnorm leave that side out")
         chosen = _column_for(column, slot, mention) if column is not None else None
         col = _as_column(chosen, kind) if chosen is not None else Column("value", kind)  # type: ignore[arg-type]
-        from datetime import datetime
-
-        d = dialect_named(dialect_name)
-        value = _bind_value(bound_value(datetime.fromisoformat(text), side, col, d.name, zone),
-                            col, d)
-        ph = params.add(f"{slot}_{side}", value)
-        if col.kind == "instant" and d.instant_param != "{}":
-            ph = d.instant_param.format(ph)
-        return ph
+        value = bound_value(datetime.fromisoformat(text), side, col, d.name, zone)
+        return bound_placeholder(params, f"{slot}_{side}", value, col, d)
 
     out: list[str] = []
     cursor = 0

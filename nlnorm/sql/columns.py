@@ -68,17 +68,21 @@ class Column:
             if self.kind != "local":
                 raise SqlError(f"zone={self.zone!r} is only for kind='local' columns (a "
                                "wall-clock timestamp in that zone)")
-            try:
-                ZoneInfo(self.zone)
-            except Exception:
-                raise SqlError(f"zone={self.zone!r} is not an IANA time zone, e.g. "
-                               "'Europe/Berlin'") from None
+            iana_zone(self.zone, "zone")
 
     def sqlite_encoding(self) -> str:
         """The encoding used on SQLite: the declared one, else text (unix for instants)."""
         if self.encoding is not None:
             return self.encoding
         return "unix" if self.kind == "instant" else "text"
+
+
+def iana_zone(name: str, what: str) -> ZoneInfo:
+    """The IANA zone ``name``, or an SqlError naming the argument ``what`` that gave it."""
+    try:
+        return ZoneInfo(name)
+    except Exception:
+        raise SqlError(f"{what}={name!r} is not an IANA time zone, e.g. 'Europe/Berlin'") from None
 
 
 def day_start(day: date, zone: ZoneInfo) -> datetime:

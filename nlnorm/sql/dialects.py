@@ -12,8 +12,9 @@ import functools
 import json
 import re
 import unicodedata
-from importlib import resources
 from dataclasses import dataclass
+from importlib import resources
+from typing import Any
 
 from .errors import SqlError
 from ..errors import suggest
@@ -48,7 +49,7 @@ class Dialect:
 DIALECTS: dict[str, Dialect] = {
     d.name: d
     for d in (
-        # SQLite has no date type: bounds follow the column's declared encoding (bounds.py).
+        # SQLite has no date type: bounds follow the column's declared encoding (columns.py).
         Dialect("sqlite", "qmark", "sqlite3 (standard library)", "{}", "{}", "{}",
                 aware_type="(unix seconds or julian day)", naive_type="TEXT"),
         Dialect("duckdb", "qmark", "duckdb", "DATE {}", "TIMESTAMP {}", "TIMESTAMPTZ {}",
@@ -144,12 +145,18 @@ def _quote_part(part: str, dialect_name: str) -> str:
     return exp.to_identifier(part, quoted=True).sql(dialect=dialect_name)
 
 
-@functools.lru_cache(maxsize=None)
-def _reserved(dialect_name: str) -> frozenset[str]:
-    """The words the dialect's engine refuses as a bare column name (reserved_words.json says
-    where each list comes from)."""
+@functools.cache
+def _reserved_words() -> dict[str, Any]:
+    """reserved_words.json, read once: each dialect's list, and where it comes from."""
     text = resources.files(__package__).joinpath("reserved_words.json").read_text("utf-8")
-    data = json.loads(text)
+    data: dict[str, Any] = json.loads(text)
+    return data
+
+
+@functools.cache
+def _reserved(dialect_name: str) -> frozenset[str]:
+    """The words the dialect's engine refuses as a bare column name."""
+    data = _reserved_words()
     words = set(data[dialect_name].split())
     if dialect_name not in ("postgres", "snowflake"):  # exact lists; quoting there is case-sensitive
         words |= set(data["sql2016"].split())

@@ -16,7 +16,7 @@ from datetime import date, datetime
 from typing import Any, Literal, Union
 from zoneinfo import ZoneInfo
 
-from .columns import Column, bound_value
+from .columns import Column, bound_value, iana_zone
 from .dialects import PARAMSTYLES, Dialect, dialect as dialect_named, quoted_name
 from .errors import SqlError
 from ..errors import suggest
@@ -177,16 +177,25 @@ def predicate(
     ps = paramstyle or d.paramstyle
     if style == "params":
         placeholder(ps, slot, 1)  # checks the paramstyle
-    zone = tz if isinstance(tz, ZoneInfo) else _zone(tz)
-    mkind = getattr(mention, "kind", None)
-    if mkind not in _PERIODS:
+    zone = tz if isinstance(tz, ZoneInfo) else iana_zone(tz, "tz")
+    params = _Params(ps, first_index)
+    where = _where(mention, col, d, zone, slot, style, params, sprint_key, sprints, team)
+    if where is None:
+        return None
+    bound = style == "params"
+    by = sprint_key if sprint_key is not None and mention.kind == "sprint" else col.name
+    return Fragment(d.name, where, params.result() if bound else (), ps if bound else None, slot, by)
+
+
+def _where(mention: Any, col: Column, d: Dialect, zone: ZoneInfo, slot: str, style: str,
+           params: _Params, sprint_key: str | None, sprints: Any, team: str | None) -> str | None:
+    """The SQL of one mention's predicate, its bound values added to ``params`` (none in the
+    literal style); ``None`` when the mention is no period."""
+    if getattr(mention, "kind", None) not in _PERIODS:
         return None
     name = quoted_name(col.name, d.name)
-    params = _Params(ps, first_index)
-    if mkind == "sprint" and sprint_key is not None:
-        where = _key_predicate(mention, sprint_key, d, style, params, slot, sprints, team)
-        return Fragment(d.name, where, params.result() if style == "params" else (),
-                        ps if style == "params" else None, slot, sprint_key)
+    if mention.kind == "sprint" and sprint_key is not None:
+        return _key_predicate(mention, sprint_key, d, style, params, slot, sprints, team)
     parts: list[str] = []
     for side, text in (("start", mention.start), ("end", mention.end)):
         if text is None:
@@ -196,13 +205,17 @@ def predicate(
         if style == "literal":
             parts.append(f"{name} {op} {_literal(value, col, d)}")
         else:
-            ph = params.add(f"{slot}_{side}", _bind_value(value, col, d))
-            if col.kind == "instant" and d.instant_param != "{}":
-                ph = d.instant_param.format(ph)
-            parts.append(f"{name} {op} {ph}")
-    where = " AND ".join(parts) if parts else "1 = 1"
-    return Fragment(d.name, where, params.result() if style == "params" else (),
-                    ps if style == "params" else None, slot, col.name)
+            parts.append(f"{name} {op} {bound_placeholder(params, f'{slot}_{side}', value, col, d)}")
+    return " AND ".join(parts) if parts else "1 = 1"
+
+
+def bound_placeholder(params: _Params, name: str, value: Any, col: Column, d: Dialect) -> str:
+    """The placeholder of one bound value added to ``params``, wrapped as the dialect wants it
+    for an instant column."""
+    ph = params.add(name, _bind_value(value, col, d))
+    if col.kind == "instant" and d.instant_param != "{}":
+        ph = d.instant_param.format(ph)
+    return ph
 
 
 def _key_predicate(mention: Any, key: str, d: Dialect, style: str, params: _Params, slot: str,
@@ -229,13 +242,6 @@ def _key_predicate(mention: Any, key: str, d: Dialect, style: str, params: _Para
     else:
         items = [params.add(f"{slot}_sprint{i}", k) for i, k in enumerate(keys, start=1)]
     return f"{column} IN ({', '.join(items)})"
-
-
-def _zone(name: str) -> ZoneInfo:
-    try:
-        return ZoneInfo(name)
-    except Exception:
-        raise SqlError(f"tz={name!r} is not an IANA time zone, e.g. 'Europe/Berlin'") from None
 
 
 def _column_for(choice: ColumnChoice, slot: str, mention: Any) -> str | Column | None:
