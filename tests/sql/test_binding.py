@@ -311,3 +311,9 @@ def test_the_utc_rows_the_tests_use_sit_on_the_bounds() -> None:
     end = datetime.fromisoformat(RESULT.template.slots["t1"].end)
     assert end.astimezone(UTC) == datetime(2026, 11, 29, 23, 0, tzinfo=UTC)
     assert end.astimezone(UTC) - timedelta(seconds=1) == _utc("2026-11-29 22:59:59")
+
+
+def test_an_unknown_paramstyle_is_an_error_that_lists_them() -> None:
+    # Source: PEP 249 names five paramstyles.
+    with pytest.raises(SqlError, match="paramstyle='qmarks': use one of qmark, numeric, named, format, pyformat"):
+        bind("SELECT 1", RESULT, "sqlite", paramstyle="qmarks")
